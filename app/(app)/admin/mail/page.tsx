@@ -1,0 +1,37 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import { can } from "@/lib/auth/permissions";
+import { currentUser } from "@/lib/auth/session";
+import { caughtMail } from "@/lib/data/caught-mail";
+
+export const metadata: Metadata = { title: "Caught mail" };
+export const dynamic = "force-dynamic";
+
+export default async function CaughtMailPage() {
+  const user = await currentUser();
+  if (!user) redirect("/signin");
+  if (!can(user.role, "mail:read-caught")) notFound();
+  const messages = await caughtMail().catch(() => undefined);
+  if (messages === null) notFound();
+  return (
+    <section>
+      <h1 className="text-2xl font-semibold">Caught mail</h1>
+      <p className="mb-4 text-soil-700">
+        On this development machine no mail leaves: everything Hoebench sends is held by the local catcher and shown here.
+      </p>
+      {messages === undefined && <p role="alert" className="rounded bg-red-50 p-3 text-red-800">The local mail catcher is not answering.</p>}
+      {messages?.length === 0 && <p className="rounded border border-dashed border-soil-200 bg-white p-6">No mail caught yet.</p>}
+      <ul className="space-y-3">
+        {messages?.map((message) => (
+          <li key={message.id} className="rounded border border-soil-200 bg-white p-4" data-testid="caught-mail">
+            <p className="font-medium">{message.subject || "(no subject)"}</p>
+            <p className="text-sm text-soil-700">
+              To {message.to.join(", ")} · from {message.from} · {new Date(message.receivedAt).toLocaleString("en-GB", { timeZone: "UTC" })} UTC
+            </p>
+            <pre className="mt-2 whitespace-pre-wrap break-words text-sm">{message.text}</pre>
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}

@@ -1,0 +1,13 @@
+import { z } from "zod";
+import { publicRoute } from "@/lib/auth/guard";
+import { createUser } from "@/lib/data/users";
+import { jsonResponse } from "@/lib/http";
+import { registerSchema } from "@/lib/validations/auth";
+
+const registeredSchema = z.object({ id: z.string(), email: z.string(), role: z.literal("grower") });
+
+/** Self-registration makes grower accounts only; other roles are created by an admin. */
+export const POST = publicRoute({ why: "people sign up before they have a session", body: registerSchema }, async ({ body }) => {
+  const user = await createUser({ name: body.name, email: body.email, password: body.password, role: "grower" });
+  return jsonResponse(registeredSchema, { id: user.id, email: user.email, role: "grower" }, 201);
+});

@@ -1,0 +1,117 @@
+import "server-only";
+import type { NextRequest } from "next/server";
+import { z } from "zod";
+import { AppError, type FieldProblem } from "@/lib/errors";
+import { errorResponse, fromZodError } from "@/lib/http";
+import type { Trial } from "@/models";
+import type { Permission } from "./permissions";
+import { currentUser, type SessionUser } from "./session";
+import { authorize } from "./trial-access";
+
+type Schema = z.ZodType;
+type Parsed<S> = S extends z.ZodType ? z.output<S> : undefined;
+
+interface RouteSpec<P extends Schema | undefined, Q extends Schema | undefined, B extends Schema | undefined> {
+  permission: Permission;
+  params?: P;
+  query?: Q;
+  body?: B;
+  /** Names the trial a trial permission is checked against. */
+  trialId?: (input: { params: Parsed<P>; query: Parsed<Q>; body: Parsed<B> }) => string;
+}
+
+export interface RouteContext<P, Q, B> {
+  request: NextRequest;
+  user: SessionUser;
+  params: P;
+  query: Q;
+  body: B;
+  trial?: Trial;
+}
+
+async function readJson(request: NextRequest): Promise<unknown> {
+  const text = await request.text();
+  if (text.length === 0) return {};
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError("INVALID_INPUT", "The request body is not valid JSON.");
+  }
+}
+
+function validate<S extends Schema | undefined>(schema: S, value: unknown, what: string): Parsed<S> {
+  if (!schema) return undefined as Parsed<S>;
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) throw fromZodError(parsed.error, `The ${what} is not valid.`);
+  return parsed.data as Parsed<S>;
+}
+
+/**
+ * Every route handler goes through here: session (401) → validate (422) → authorize
+ * (403/404) → act → respond, with every failure shaped by lib/http.
+ */
+export function route<P extends Schema | undefined = undefined, Q extends Schema | undefined = undefined, B extends Schema | undefined = undefined>(
+  spec: RouteSpec<P, Q, B>,
+  handle: (context: RouteContext<Parsed<P>, Parsed<Q>, Parsed<B>>) => Promise<Response>,
+) {
+  return async (request: NextRequest, segment: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
+    try {
+      const user = await currentUser();
+      if (!user) throw new AppError("UNAUTHENTICATED", "Please sign in to continue.");
+      const params = validate<P>(spec.params as P, await segment?.params, "address");
+      const query = validate<Q>(spec.query as Q, Object.fromEntries(request.nextUrl.searchParams), "query");
+      const body = validate<B>(spec.body as B, spec.body ? await readJson(request) : undefined, "request");
+      const trialId = spec.trialId?.({ params, query, body });
+      const trial = await authorize(user, spec.permission, trialId);
+      return await handle({ request, user, params, query, body, trial });
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+export type ActionResult<T> =
+  | { ok: true; data: T }
+  | { ok: false; error: { code: string; message: string; fields?: FieldProblem[] } };
+
+/** The same order for server actions; the result is plain data a form can show. */
+export function action<S extends Schema, T>(
+  spec: { permission: Permission; input: S; trialId?: (input: z.output<S>) => string },
+  handle: (context: { user: SessionUser; input: z.output<S>; trial?: Trial }) => Promise<T>,
+) {
+  return async (raw: unknown): Promise<ActionResult<T>> => {
+    try {
+      const user = await currentUser();
+      if (!user) throw new AppError("UNAUTHENTICATED", "Please sign in to continue.");
+      const input = validate(spec.input, raw, "form") as z.output<S>;
+      const trial = await authorize(user, spec.permission, spec.trialId?.(input));
+      return { ok: true, data: await handle({ user, input, trial }) };
+    } catch (error) {
+      if (error instanceof AppError) {
+        return { ok: false, error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
+      }
+      console.error("server action failed", error);
+      return { ok: false, error: { code: "INTERNAL", message: "Something went wrong on our side. Nothing was changed; please try again." } };
+    }
+  };
+}
+
+/**
+ * For the few endpoints meant for everyone (health, self-registration, the public library):
+ * the same validation and error shaping, and the reason it is public stated at the call.
+ */
+export function publicRoute<P extends Schema | undefined = undefined, Q extends Schema | undefined = undefined, B extends Schema | undefined = undefined>(
+  spec: { why: string; params?: P; query?: Q; body?: B },
+  handle: (context: { request: NextRequest; params: Parsed<P>; query: Parsed<Q>; body: Parsed<B> }) => Promise<Response>,
+) {
+  return async (request: NextRequest, segment: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
+    try {
+      const params = validate<P>(spec.params as P, await segment?.params, "address");
+      const query = validate<Q>(spec.query as Q, Object.fromEntries(request.nextUrl.searchParams), "query");
+      const body = validate<B>(spec.body as B, spec.body ? await readJson(request) : undefined, "request");
+      return await handle({ request, params, query, body });
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}

@@ -1,0 +1,32 @@
+import { can, type Permission } from "@/lib/auth/permissions";
+import type { Role } from "@/lib/auth/roles";
+
+export interface NavItem {
+  href: string;
+  label: string;
+  permission?: Permission;
+  roles?: readonly Role[];
+}
+
+const homeLabel: Record<Role, string> = {
+  admin: "Overview",
+  researcher: "My trials",
+  technician: "Trials I collect for",
+  reviewer: "Awaiting review",
+  grower: "Published results",
+};
+
+const items: NavItem[] = [
+  { href: "/admin/users", label: "Users", permission: "user:manage" },
+  { href: "/admin/mail", label: "Caught mail", permission: "mail:read-caught" },
+];
+
+/** The navigation a role sees; the role table decides, not the page. */
+export function navigationFor(role: Role, options: { mailCatcher: boolean }): NavItem[] {
+  const visible = items.filter((item) => {
+    if (item.href === "/admin/mail" && !options.mailCatcher) return false;
+    if (item.permission && !can(role, item.permission)) return false;
+    return !item.roles || item.roles.includes(role);
+  });
+  return [{ href: "/", label: homeLabel[role] }, ...visible];
+}

@@ -1,0 +1,6 @@
+import type { QueryInterface } from "sequelize";
+
+/** What umzug hands every migration. */
+export interface MigrationParams {
+  context: QueryInterface;
+}

@@ -1,0 +1,29 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { Role } from "@/lib/auth/roles";
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<string>;
+  declare email: string;
+  declare name: string;
+  declare role: Role;
+  declare passwordHash: string;
+  declare active: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    User.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        role: { type: DataTypes.STRING(20), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+        active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "users", modelName: "User" },
+    );
+  }
+}

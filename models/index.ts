@@ -1,0 +1,28 @@
+import type { Sequelize } from "sequelize";
+import { Membership } from "./Membership";
+import { Site } from "./Site";
+import { Trial } from "./Trial";
+import { User } from "./User";
+
+export { Membership, Site, Trial, User };
+
+const initializedWith = new WeakSet<Sequelize>();
+
+/**
+ * Binds these model classes to a connection. Next bundles a module once per route, so each
+ * copy of this module binds its own classes to the one shared connection, once.
+ */
+export function initModels(sequelize: Sequelize): void {
+  if (initializedWith.has(sequelize)) return;
+  initializedWith.add(sequelize);
+  User.initModel(sequelize);
+  Site.initModel(sequelize);
+  Trial.initModel(sequelize);
+  Membership.initModel(sequelize);
+
+  Trial.belongsTo(Site, { as: "site", foreignKey: "siteId" });
+  Trial.belongsTo(User, { as: "owner", foreignKey: "ownerId" });
+  Trial.hasMany(Membership, { as: "memberships", foreignKey: "trialId" });
+  Membership.belongsTo(User, { as: "user", foreignKey: "userId" });
+  Membership.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
+}

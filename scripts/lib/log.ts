@@ -1,0 +1,3 @@
+export function say(message: string): void {
+  process.stdout.write(`[hoebench] ${message}\n`);
+}

@@ -1,0 +1,137 @@
+/**
+ * `npm start`, `npm run dev` and `npm test`: bring up PostgreSQL, the schema, the demo,
+ * the local S3 and mail fakes, and the app, on loopback; then serve, or run every test.
+ * Running it again reuses what is there; Ctrl-C stops what this run started.
+ */
+import { existsSync, mkdirSync, rmSync } from "node:fs";
+import path from "node:path";
+import { spawnSync } from "node:child_process";
+import { ensureDebianPackages } from "./lib/apt";
+import { ensureCluster, ensureDatabase, recreateDatabase } from "./lib/postgres";
+import { prepareDatabase } from "./lib/database";
+import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, type Mode } from "./lib/environment";
+import { say } from "./lib/log";
+import { httpOk, onShutdown, portOpen, shutdown, startChild, stopChildren, waitFor } from "./lib/processes";
+import { summarizeReports } from "./lib/test-report";
+import { demoUsers, DEMO_PASSWORD } from "@/lib/demo/scenario";
+
+const nextBin = path.join(projectRoot, "node_modules/next/dist/bin/next");
+const tsxBin = path.join(projectRoot, "node_modules/.bin/tsx");
+
+async function startFakes(mode: Mode, env: Record<string, string>): Promise<void> {
+  const ports = portsFor(mode);
+  if (await portOpen(ports.smtp)) {
+    say(`local S3 and mail fakes already running on ${ports.s3}/${ports.smtp}`);
+    return;
+  }
+  const fakeState = path.join(stateRoot, mode === "test" ? "fakes-test" : "fakes");
+  if (mode === "test") rmSync(fakeState, { recursive: true, force: true });
+  mkdirSync(fakeState, { recursive: true });
+  startChild("local S3 and mail fakes", tsxBin, [path.join(projectRoot, "scripts/fakes.ts")], {
+    ...env,
+    FAKE_S3_PORT: String(ports.s3),
+    FAKE_SMTP_PORT: String(ports.smtp),
+    FAKE_MAIL_HTTP_PORT: String(ports.mailHttp),
+    FAKE_STATE_DIR: fakeState,
+    FAKE_S3_BUCKETS: env.S3_BUCKET,
+  }, projectRoot);
+  await waitFor("the local mail catcher", () => httpOk(`http://127.0.0.1:${ports.mailHttp}/health`), 30_000);
+}
+
+function buildApp(env: Record<string, string>): void {
+  say("building the app (next build)");
+  const result = spawnSync(process.execPath, [nextBin, "build"], { cwd: projectRoot, env: { ...process.env, ...env }, stdio: "inherit" });
+  if (result.status !== 0) throw new Error("next build failed");
+}
+
+async function serveApp(mode: "start" | "dev" | "test", env: Record<string, string>): Promise<void> {
+  const port = portsFor(mode).app;
+  if (await portOpen(port)) throw new Error(`port ${port} is taken; is Hoebench already running? Stop it first.`);
+  const command = mode === "dev" ? "dev" : "start";
+  startChild("the app", process.execPath, [nextBin, command, "-p", String(port), "-H", "127.0.0.1"], { ...env, NODE_ENV: mode === "dev" ? "development" : "production" }, projectRoot);
+  await waitFor("the app", () => httpOk(`http://127.0.0.1:${port}/api/health`), mode === "dev" ? 180_000 : 60_000);
+}
+
+async function bringUp(mode: Mode, database = databaseFor(mode)): Promise<Record<string, string>> {
+  const cluster = ensureCluster({ projectRoot, port: POSTGRES_PORT, fastUnsafe: mode === "test" });
+  if (cluster.startedHere) onShutdown(cluster.stop);
+  const env = appEnvironment(mode, database);
+  if (mode === "test") recreateDatabase(POSTGRES_PORT, database);
+  else if (ensureDatabase(POSTGRES_PORT, database)) say(`created database ${database}`);
+  await prepareDatabase(env.DATABASE_URL, { seed: true });
+  return env;
+}
+
+function printWelcome(port: number): void {
+  const width = Math.max(...demoUsers.map((user) => user.email.length));
+  say("");
+  say(`Hoebench is running at http://127.0.0.1:${port}`);
+  say(`Demo sign-ins (password for all: ${DEMO_PASSWORD}):`);
+  for (const user of demoUsers) say(`  ${user.email.padEnd(width)}  ${user.role}`);
+  say("Press Ctrl-C to stop.");
+}
+
+async function serve(mode: "start" | "dev"): Promise<void> {
+  const env = await bringUp(mode);
+  await startFakes(mode, env);
+  if (mode === "start") buildApp(env);
+  await serveApp(mode, env);
+  printWelcome(portsFor(mode).app);
+  process.on("SIGINT", () => shutdown(0));
+  process.on("SIGTERM", () => shutdown(0));
+  await new Promise(() => {});
+}
+
+async function test(args: string[]): Promise<void> {
+  const filters = args.filter((arg) => !arg.startsWith("--"));
+  const runBrowser = filters.length === 0 || args.includes("--e2e");
+  if (runBrowser) ensureDebianPackages("/usr/bin/chromium", ["chromium"]);
+  const env = await bringUp("test");
+  process.on("SIGINT", () => shutdown(130));
+  await startFakes("test", env);
+  if (runBrowser) {
+    buildApp(env);
+    await serveApp("test", env);
+  }
+  const reports = path.join(stateRoot, "reports");
+  rmSync(reports, { recursive: true, force: true });
+  mkdirSync(reports, { recursive: true });
+  const childEnv = { ...process.env, ...env, HOEBENCH_TEST: "1", NODE_ENV: "test" } as NodeJS.ProcessEnv;
+
+  say("running unit and integration tests (vitest)");
+  spawnSync(process.execPath, [path.join(projectRoot, "node_modules/vitest/vitest.mjs"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${path.join(reports, "vitest.json")}`, ...filters], {
+    cwd: projectRoot, env: childEnv, stdio: "inherit",
+  });
+  if (runBrowser) {
+    say("running browser tests (playwright, Debian chromium)");
+    spawnSync(process.execPath, [path.join(projectRoot, "node_modules/@playwright/test/cli.js"), "test", "--reporter=list,json"], {
+      cwd: projectRoot, env: { ...childEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: path.join(reports, "playwright.json") }, stdio: "inherit",
+    });
+  }
+  stopChildren();
+  const summary = summarizeReports(reports, { expectBrowser: runBrowser });
+  process.stdout.write(`${summary.line}\n`);
+  shutdown(summary.failed > 0 || summary.passed === 0 ? 1 : 0);
+}
+
+async function setupOnly(args: string[]): Promise<void> {
+  const databaseIndex = args.indexOf("--database");
+  const database = databaseIndex >= 0 ? args[databaseIndex + 1] : databaseFor("start");
+  ensureCluster({ projectRoot, port: POSTGRES_PORT });
+  ensureDatabase(POSTGRES_PORT, database);
+  await prepareDatabase(appEnvironment("start", database).DATABASE_URL, { seed: true });
+}
+
+async function main(): Promise<void> {
+  const [mode = "start", ...rest] = process.argv.slice(2);
+  if (!existsSync(nextBin)) throw new Error("npm packages are missing; run through `npm start`");
+  if (mode === "start" || mode === "dev") return serve(mode);
+  if (mode === "test") return test(rest);
+  if (mode === "setup") return setupOnly(rest);
+  throw new Error(`unknown mode ${mode}; use start, dev, test or setup`);
+}
+
+main().catch((error: Error) => {
+  process.stderr.write(`[hoebench] ${error.message}\n`);
+  shutdown(1);
+});
