@@ -1,0 +1,16 @@
+import { describe, expect, it } from "vitest";
+import { parseConfig } from "@/lib/config";
+
+describe("configuration", () => {
+  it("fills in the loopback defaults of a development machine", () => {
+    const settings = parseConfig({});
+    expect(settings.DATABASE_URL).toBe("postgres://postgres@127.0.0.1:54329/hoebench");
+    expect(settings.S3_FORCE_PATH_STYLE).toBe(true);
+    expect(settings.SMTP_PORT).toBe(2525);
+    expect(settings.MAIL_CATCHER_URL).toBeUndefined();
+  });
+
+  it("names each bad setting", () => {
+    expect(() => parseConfig({ DATABASE_URL: "nowhere", SMTP_PORT: "99999" })).toThrow(/DATABASE_URL[\s\S]*SMTP_PORT/);
+  });
+});

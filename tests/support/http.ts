@@ -1,0 +1,53 @@
+import { DEMO_PASSWORD } from "@/lib/demo/scenario";
+import { testEnvironment } from "./environment";
+
+/** A signed-in (or signed-out) client of the running test server, keeping its cookies. */
+export class TestClient {
+  private cookies = new Map<string, string>();
+  readonly baseUrl = testEnvironment().baseUrl;
+
+  private remember(response: Response): void {
+    for (const header of response.headers.getSetCookie()) {
+      const [pair] = header.split(";");
+      const index = pair.indexOf("=");
+      this.cookies.set(pair.slice(0, index), pair.slice(index + 1));
+    }
+  }
+
+  private cookieHeader(): string {
+    return [...this.cookies].map(([name, value]) => `${name}=${value}`).join("; ");
+  }
+
+  async request(path: string, init: RequestInit & { json?: unknown } = {}): Promise<Response> {
+    const { json, ...rest } = init;
+    const response = await fetch(new URL(path, this.baseUrl), {
+      redirect: "manual",
+      ...rest,
+      headers: {
+        cookie: this.cookieHeader(),
+        ...(json !== undefined ? { "content-type": "application/json" } : {}),
+        ...rest.headers,
+      },
+      body: json !== undefined ? JSON.stringify(json) : rest.body,
+    });
+    this.remember(response);
+    return response;
+  }
+
+  async signIn(email: string, password = DEMO_PASSWORD): Promise<boolean> {
+    const csrf = await this.request("/api/auth/csrf");
+    const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+    await this.request("/api/auth/callback/credentials", {
+      method: "POST",
+      headers: { "content-type": "application/x-www-form-urlencoded" },
+      body: new URLSearchParams({ csrfToken, email, password, json: "true" }).toString(),
+    });
+    return [...this.cookies.keys()].some((name) => name.endsWith("next-auth.session-token"));
+  }
+}
+
+export async function signedInAs(email: string): Promise<TestClient> {
+  const client = new TestClient();
+  if (!(await client.signIn(email))) throw new Error(`could not sign in as ${email}`);
+  return client;
+}
