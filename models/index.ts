@@ -1,10 +1,13 @@
 import type { Sequelize } from "sequelize";
+import { Assessment } from "./Assessment";
 import { Membership } from "./Membership";
+import { Plot } from "./Plot";
 import { Site } from "./Site";
+import { Treatment } from "./Treatment";
 import { Trial } from "./Trial";
 import { User } from "./User";
 
-export { Membership, Site, Trial, User };
+export { Assessment, Membership, Plot, Site, Treatment, Trial, User };
 
 const initializedWith = new WeakSet<Sequelize>();
 
@@ -19,10 +22,20 @@ export function initModels(sequelize: Sequelize): void {
   Site.initModel(sequelize);
   Trial.initModel(sequelize);
   Membership.initModel(sequelize);
+  Treatment.initModel(sequelize);
+  Plot.initModel(sequelize);
+  Assessment.initModel(sequelize);
 
   Trial.belongsTo(Site, { as: "site", foreignKey: "siteId" });
   Trial.belongsTo(User, { as: "owner", foreignKey: "ownerId" });
   Trial.hasMany(Membership, { as: "memberships", foreignKey: "trialId" });
   Membership.belongsTo(User, { as: "user", foreignKey: "userId" });
   Membership.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
+  Trial.hasMany(Treatment, { as: "treatments", foreignKey: "trialId" });
+  Trial.hasMany(Plot, { as: "plots", foreignKey: "trialId" });
+  Trial.hasMany(Assessment, { as: "assessments", foreignKey: "trialId" });
+  Treatment.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
+  Plot.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
+  Plot.belongsTo(Treatment, { as: "treatment", foreignKey: "treatmentId" });
+  Assessment.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
 }
