@@ -2,7 +2,7 @@ import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
   // Sequelize loads its dialect at run time; bundling it breaks that look-up.
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "bcryptjs", "nodemailer", "s3rver"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "bcryptjs", "nodemailer", "s3rver", "pdfkit", "svg-to-pdfkit"],
   // Tests build into their own folder so `npm test` never disturbs a running `npm start`.
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   poweredByHeader: false,
