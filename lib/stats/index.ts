@@ -47,3 +47,15 @@ export { equivalenceTost } from "./tests/equivalence-tost";
 export { assumptionAdvice } from "./tests/assumption-advice";
 
 export { residualDfCheck } from "./planning/residual-df-check";
+export { blocksNeeded, type BlocksNeededInput, type BlocksNeededResult } from "./planning/blocks-needed";
+
+export { unitConstants } from "./measures/unit-constants";
+export { percentControl } from "./measures/percent-control";
+export { weedControlEfficiency } from "./measures/weed-control-efficiency";
+export { weedIndex } from "./measures/weed-index";
+export { abbottCorrection } from "./measures/abbott-correction";
+export { hendersonTilton } from "./measures/henderson-tilton";
+export { quadratDensity } from "./measures/quadrat-density";
+export { plotYieldPerArea, type AreaYield } from "./measures/plot-yield-per-area";
+export { perSquareFootToPerSquareMetre } from "./measures/per-square-foot-to-per-square-metre";
+export { perSquareMetreToPerSquareFoot } from "./measures/per-square-metre-to-per-square-foot";
