@@ -154,7 +154,8 @@ export function analyzeTrial(rows: ReadonlyArray<TrialRow>, optionsInput: TrialO
     cvPercent,
     anova: fit.anova,
     means,
-    lsd: fisherLsd(comparisons, fit.errorDf, options.alpha),
+    // The contract asks for null whenever plots are missing or replication differs, even if SEs happen to coincide.
+    lsd: fit.balanced ? fisherLsd(comparisons, fit.errorDf, options.alpha) : null,
     comparisons: comparisons.map(({ a, b, diff, se, pLsd, pTukey }) => ({ a, b, diff, se, pLsd, pTukey })),
     assumptions: {
       shapiroWilk: shapiro ? { w: shapiro.w, p: shapiro.p } : null,
