@@ -14,7 +14,7 @@ const chromiumFlags = [
 
 export default defineConfig({
   testDir: "tests/e2e",
-  outputDir: "test-results",
+  outputDir: process.env.HOEBENCH_TEST_SLOT ? `test-results-${process.env.HOEBENCH_TEST_SLOT}` : "test-results",
   fullyParallel: false,
   workers: 1,
   retries: 0,

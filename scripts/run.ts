@@ -9,7 +9,7 @@ import { spawnSync } from "node:child_process";
 import { ensureDebianPackages } from "./lib/apt";
 import { ensureCluster, ensureDatabase, recreateDatabase } from "./lib/postgres";
 import { prepareDatabase } from "./lib/database";
-import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, type Mode } from "./lib/environment";
+import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName, type Mode } from "./lib/environment";
 import { say } from "./lib/log";
 import { httpOk, onShutdown, portOpen, shutdown, startChild, stopChildren, waitFor } from "./lib/processes";
 import { summarizeReports } from "./lib/test-report";
@@ -24,7 +24,7 @@ async function startFakes(mode: Mode, env: Record<string, string>): Promise<void
     say(`local S3 and mail fakes already running on ${ports.s3}/${ports.smtp}`);
     return;
   }
-  const fakeState = path.join(stateRoot, mode === "test" ? "fakes-test" : "fakes");
+  const fakeState = path.join(stateRoot, mode === "test" ? testStateName("fakes-test") : "fakes");
   if (mode === "test") rmSync(fakeState, { recursive: true, force: true });
   mkdirSync(fakeState, { recursive: true });
   startChild("local S3 and mail fakes", tsxBin, [path.join(projectRoot, "scripts/fakes.ts")], {
@@ -93,7 +93,7 @@ async function test(args: string[]): Promise<void> {
     buildApp(env);
     await serveApp("test", env);
   }
-  const reports = path.join(stateRoot, "reports");
+  const reports = path.join(stateRoot, testStateName("reports"));
   rmSync(reports, { recursive: true, force: true });
   mkdirSync(reports, { recursive: true });
   const childEnv = { ...process.env, ...env, HOEBENCH_TEST: "1", NODE_ENV: "test" } as NodeJS.ProcessEnv;

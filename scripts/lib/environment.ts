@@ -15,11 +15,21 @@ export interface Ports {
   mailHttp: number;
 }
 
-// Tests use their own ports and database, so `npm test` can run beside `npm start`.
-export const portsFor = (mode: Mode): Ports =>
-  mode === "test" ? { app: 3100, s3: 4579, smtp: 2535, mailHttp: 2536 } : { app: 3000, s3: 4569, smtp: 2525, mailHttp: 2526 };
+/**
+ * Tests use their own ports, database and build folder, so `npm test` can run beside
+ * `npm start`; HOEBENCH_TEST_SLOT=N gives a further, separate set for a second test run.
+ */
+export const testSlot = Number(process.env.HOEBENCH_TEST_SLOT ?? 0);
+const slotSuffix = testSlot ? `_${testSlot}` : "";
 
-export const databaseFor = (mode: Mode) => (mode === "test" ? "hoebench_test" : "hoebench");
+export const portsFor = (mode: Mode): Ports => {
+  if (mode !== "test") return { app: 3000, s3: 4569, smtp: 2525, mailHttp: 2526 };
+  const offset = testSlot * 10;
+  return { app: 3100 + offset, s3: 4579 + offset, smtp: 2535 + offset, mailHttp: 2536 + offset };
+};
+
+export const databaseFor = (mode: Mode) => (mode === "test" ? `hoebench_test${slotSuffix}` : "hoebench");
+export const testStateName = (name: string) => `${name}${slotSuffix.replace("_", "-")}`;
 
 /** A per-checkout secret, made once, so sessions survive restarts without a committed key. */
 function sessionSecret(): string {
@@ -47,6 +57,6 @@ export function appEnvironment(mode: Mode, database = databaseFor(mode)): Record
     SMTP_PORT: String(ports.smtp),
     MAIL_CATCHER_URL: `http://127.0.0.1:${ports.mailHttp}`,
     NEXT_TELEMETRY_DISABLED: "1",
-    NEXT_DIST_DIR: mode === "test" ? ".next-test" : ".next",
+    NEXT_DIST_DIR: mode === "test" ? testStateName(".next-test") : ".next",
   };
 }
