@@ -1,13 +1,18 @@
 import type { Sequelize } from "sequelize";
 import { Assessment } from "./Assessment";
+import { AuditEvent } from "./AuditEvent";
+import { DatasetVersion } from "./DatasetVersion";
 import { Membership } from "./Membership";
+import { Observation } from "./Observation";
+import { Photo } from "./Photo";
 import { Plot } from "./Plot";
 import { Site } from "./Site";
 import { Treatment } from "./Treatment";
 import { Trial } from "./Trial";
+import { Upload } from "./Upload";
 import { User } from "./User";
 
-export { Assessment, Membership, Plot, Site, Treatment, Trial, User };
+export { Assessment, AuditEvent, DatasetVersion, Membership, Observation, Photo, Plot, Site, Treatment, Trial, Upload, User };
 
 const initializedWith = new WeakSet<Sequelize>();
 
@@ -25,6 +30,11 @@ export function initModels(sequelize: Sequelize): void {
   Treatment.initModel(sequelize);
   Plot.initModel(sequelize);
   Assessment.initModel(sequelize);
+  Upload.initModel(sequelize);
+  DatasetVersion.initModel(sequelize);
+  Observation.initModel(sequelize);
+  AuditEvent.initModel(sequelize);
+  Photo.initModel(sequelize);
 
   Trial.belongsTo(Site, { as: "site", foreignKey: "siteId" });
   Trial.belongsTo(User, { as: "owner", foreignKey: "ownerId" });
@@ -38,4 +48,10 @@ export function initModels(sequelize: Sequelize): void {
   Plot.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
   Plot.belongsTo(Treatment, { as: "treatment", foreignKey: "treatmentId" });
   Assessment.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
+  DatasetVersion.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
+  DatasetVersion.belongsTo(Upload, { as: "upload", foreignKey: "uploadId" });
+  Upload.belongsTo(User, { as: "uploadedBy", foreignKey: "uploadedById" });
+  Observation.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
+  AuditEvent.belongsTo(User, { as: "user", foreignKey: "userId" });
+  Photo.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
 }

@@ -1,0 +1,43 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+export const versionSources = ["upload", "manual"] as const;
+export type VersionSource = (typeof versionSources)[number];
+
+/**
+ * Each committed change to an assessment's data is a numbered version (1, 2, 3, …). The
+ * observations a version brought in and the ones it replaced are found through it, so any
+ * earlier state and every change can be shown.
+ */
+export class DatasetVersion extends Model<InferAttributes<DatasetVersion>, InferCreationAttributes<DatasetVersion>> {
+  declare id: CreationOptional<string>;
+  declare assessmentId: string;
+  declare trialId: string;
+  declare number: number;
+  declare source: VersionSource;
+  declare uploadId: string | null;
+  declare createdById: string;
+  /** Required once the trial is locked; shown to the reviewer. */
+  declare reason: string | null;
+  declare rowsAdded: number;
+  declare rowsReplaced: number;
+  declare createdAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    DatasetVersion.init(
+      {
+        id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
+        assessmentId: { type: DataTypes.UUID, allowNull: false },
+        trialId: { type: DataTypes.UUID, allowNull: false },
+        number: { type: DataTypes.INTEGER, allowNull: false },
+        source: { type: DataTypes.STRING(10), allowNull: false },
+        uploadId: { type: DataTypes.UUID, allowNull: true },
+        createdById: { type: DataTypes.UUID, allowNull: false },
+        reason: { type: DataTypes.TEXT, allowNull: true },
+        rowsAdded: { type: DataTypes.INTEGER, allowNull: false },
+        rowsReplaced: { type: DataTypes.INTEGER, allowNull: false },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "dataset_versions", modelName: "DatasetVersion", updatedAt: false },
+    );
+  }
+}
