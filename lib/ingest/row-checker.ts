@@ -1,0 +1,192 @@
+import { readHeader, sameUnit, type ColumnMap } from "./header";
+import type { IngestContext, IngestProblem, IngestRecord, IngestResult } from "./types";
+import { readNumberCell, readWholeNumber } from "./values";
+
+const MAX_PROBLEMS_SHOWN = 500;
+
+function describePlots(numbers: number[]): string {
+  const sorted = [...numbers].sort((a, b) => a - b);
+  return sorted.length > 12 ? `${sorted.slice(0, 12).join(", ")} and ${sorted.length - 12} more` : sorted.join(", ");
+}
+
+/**
+ * Checks a data file row by row as it streams in: every problem gets its row number and a
+ * plain message; errors stop the commit, warnings (a value outside the plausible range, a
+ * lost plot) are shown and left to the uploader's judgement.
+ */
+export class RowChecker {
+  private map: ColumnMap | null = null;
+  private headerSeen = false;
+  private headerWidth = 0;
+  private readonly plotsByNumber: Map<number, string>;
+  private readonly seen = new Map<string, number>();
+  private readonly records: IngestRecord[] = [];
+  private readonly problems: IngestProblem[] = [];
+  private problemCount = 0;
+  private errors = 0;
+  private rowsRead = 0;
+
+  constructor(private readonly context: IngestContext) {
+    this.plotsByNumber = new Map(context.plots.map((plot) => [plot.number, plot.treatmentCode]));
+  }
+
+  private report(problem: IngestProblem): void {
+    this.problemCount += 1;
+    if (problem.severity === "error") this.errors += 1;
+    if (this.problems.length < MAX_PROBLEMS_SHOWN) this.problems.push(problem);
+  }
+
+  get errorCount(): number {
+    return this.errors;
+  }
+
+  /** Feed one parsed row (header first); `row` is the file's line number, 1 for the header. */
+  accept(cells: string[], row: number): void {
+    if (!this.headerSeen) {
+      this.headerSeen = true;
+      this.headerWidth = cells.length;
+      const { map, problems } = readHeader(cells, this.context.unit, this.context.quadratsPerPlot);
+      problems.forEach((problem) => this.report(problem));
+      this.map = map;
+      return;
+    }
+    if (!this.map) return;
+    if (cells.every((cell) => cell.trim() === "")) return;
+    this.rowsRead += 1;
+    if (cells.length > this.headerWidth) {
+      this.report({
+        severity: "error",
+        code: "ragged-row",
+        row,
+        message: `Row ${row} has ${cells.length} cells but the header has ${this.headerWidth}. A value like 12,5 with a comma as decimal mark splits a cell: use 12.5.`,
+      });
+      return;
+    }
+    const map = this.map;
+    const plotNumber = readWholeNumber(cells[map.plot]);
+    if (plotNumber === null) {
+      this.report({ severity: "error", code: "unknown-plot", row, column: "plot", message: `Row ${row}: "${(cells[map.plot] ?? "").trim()}" is not a plot number.` });
+      return;
+    }
+    const treatmentCode = this.plotsByNumber.get(plotNumber);
+    if (treatmentCode === undefined) {
+      this.report({ severity: "error", code: "unknown-plot", row, column: "plot", message: `Row ${row}: plot ${plotNumber} is not in this trial.` });
+      return;
+    }
+    if (map.treatment !== null) {
+      const stated = (cells[map.treatment] ?? "").trim();
+      if (stated && stated.toLowerCase() !== treatmentCode.toLowerCase()) {
+        this.report({
+          severity: "error",
+          code: "treatment-mismatch",
+          row,
+          column: "treatment",
+          message: `Row ${row}: plot ${plotNumber} carries treatment ${treatmentCode} in this trial, not ${stated}. Check the plot number.`,
+        });
+        return;
+      }
+    }
+    if (map.unit !== null) {
+      const stated = (cells[map.unit] ?? "").trim();
+      if (stated && !sameUnit(stated, this.context.unit)) {
+        this.report({ severity: "error", code: "wrong-unit", row, column: "unit", message: `Row ${row}: the value is in ${stated}, but this assessment records ${this.context.unit}.` });
+        return;
+      }
+    }
+    const species = map.species !== null ? (cells[map.species] ?? "").trim().slice(0, 80) : "";
+    if (map.format === "wide") {
+      for (const [index, quadrat] of map.quadratColumns) this.acceptValue(cells[index], row, `q${quadrat}`, plotNumber, quadrat, species);
+      return;
+    }
+    let quadrat = 1;
+    if (map.quadrat !== null) {
+      const parsed = readWholeNumber(cells[map.quadrat]);
+      if (parsed === null || parsed < 1 || parsed > this.context.quadratsPerPlot) {
+        this.report({
+          severity: "error",
+          code: "bad-quadrat",
+          row,
+          column: "quadrat",
+          message: `Row ${row}: quadrat "${(cells[map.quadrat] ?? "").trim()}" is not between 1 and ${this.context.quadratsPerPlot}.`,
+        });
+        return;
+      }
+      quadrat = parsed;
+    }
+    this.acceptValue(cells[map.value!], row, "value", plotNumber, quadrat, species);
+  }
+
+  private acceptValue(raw: string | undefined, row: number, column: string, plotNumber: number, quadrat: number, species: string): void {
+    const where = `plot ${plotNumber}, quadrat ${quadrat}${species ? `, ${species}` : ""}`;
+    const reading = readNumberCell(raw);
+    if (reading.kind === "missing") {
+      this.report({ severity: "warning", code: "no-value", row, column, message: `Row ${row}: no value for ${where}; it is left out (a lost quadrat).` });
+      return;
+    }
+    if (reading.kind === "decimal-comma") {
+      this.report({ severity: "error", code: "not-a-number", row, column, message: `Row ${row}: "${(raw ?? "").trim()}" uses a comma as decimal mark; write it with a point (${(raw ?? "").trim().replace(",", ".")}).` });
+      return;
+    }
+    if (reading.kind === "text") {
+      this.report({ severity: "error", code: "not-a-number", row, column, message: `Row ${row}: "${(raw ?? "").trim().slice(0, 40)}" for ${where} is not a number.` });
+      return;
+    }
+    if (reading.value < 0) {
+      this.report({ severity: "error", code: "negative", row, column, message: `Row ${row}: ${reading.value} for ${where} is negative; counts, weights and ratings cannot be.` });
+      return;
+    }
+    const key = `${plotNumber}|${quadrat}|${species.toLowerCase()}`;
+    const earlier = this.seen.get(key);
+    if (earlier !== undefined) {
+      this.report({ severity: "error", code: "duplicate", row, column, message: `Row ${row}: ${where} already has a value in row ${earlier}. Keep one of them.` });
+      return;
+    }
+    this.seen.set(key, row);
+    const { plausibleMin, plausibleMax } = this.context;
+    if ((plausibleMin !== null && reading.value < plausibleMin) || (plausibleMax !== null && reading.value > plausibleMax)) {
+      this.report({
+        severity: "warning",
+        code: "implausible",
+        row,
+        column,
+        message: `Row ${row}: ${reading.value} ${this.context.unit} for ${where} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
+      });
+    }
+    this.records.push({ row, plotNumber, quadrat, species, value: reading.value });
+  }
+
+  finish(): IngestResult {
+    if (!this.headerSeen) {
+      this.report({ severity: "error", code: "empty-file", message: "The file is empty. Fill in the data sheet and upload it again." });
+    } else if (this.map && this.records.length === 0 && this.errorCount === 0) {
+      this.report({ severity: "error", code: "no-values", message: "The file has a header but no values. Fill in the data sheet and upload it again." });
+    }
+    if (this.map && this.records.length > 0) {
+      const quadratsByPlot = new Map<number, Set<number>>();
+      for (const record of this.records) {
+        if (!quadratsByPlot.has(record.plotNumber)) quadratsByPlot.set(record.plotNumber, new Set());
+        quadratsByPlot.get(record.plotNumber)!.add(record.quadrat);
+      }
+      const missingPlots = [...this.plotsByNumber.keys()].filter((number) => !quadratsByPlot.has(number));
+      if (missingPlots.length > 0) {
+        this.report({
+          severity: "warning",
+          code: "missing-plot",
+          message: `No values for plot${missingPlots.length === 1 ? "" : "s"} ${describePlots(missingPlots)}. ${missingPlots.length === 1 ? "It is" : "They are"} analysed as lost plots unless you add them.`,
+        });
+      }
+      const short = [...quadratsByPlot].filter(([, quadrats]) => quadrats.size < this.context.quadratsPerPlot).map(([number]) => number);
+      if (short.length > 0) {
+        this.report({
+          severity: "warning",
+          code: "missing-quadrat",
+          message: `Plot${short.length === 1 ? "" : "s"} ${describePlots(short)} ${short.length === 1 ? "has" : "have"} fewer than ${this.context.quadratsPerPlot} quadrats; the plot mean uses the quadrats present.`,
+        });
+      }
+    }
+    if (this.problemCount > this.problems.length) {
+      this.problems.push({ severity: "warning", code: "more-problems", message: `${this.problemCount - this.problems.length} further problems are not listed. Fix the ones above and upload again.` });
+    }
+    return { format: this.map?.format ?? null, records: this.records, problems: this.problems, rowsRead: this.rowsRead };
+  }
+}
