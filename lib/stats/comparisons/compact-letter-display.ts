@@ -25,31 +25,49 @@
  */
 export function compactLetterDisplay(means: ArrayLike<number>, isSignificant: (first: number, second: number) => boolean): string[] {
   const count = means.length;
-  let columns: Uint8Array[] = [new Uint8Array(count).fill(1)];
+  const words = Math.max(1, Math.ceil(count / 32));
+  const everyone = new Uint32Array(words);
+  for (let treatment = 0; treatment < count; treatment++) everyone[treatment >>> 5] |= 1 << (treatment & 31);
+  let columns: Uint32Array[] = [everyone];
   for (let first = 0; first < count; first++) {
+    const firstWord = first >>> 5;
+    const firstBit = 1 << (first & 31);
     for (let second = first + 1; second < count; second++) {
+      const secondWord = second >>> 5;
+      const secondBit = 1 << (second & 31);
+      if (!columns.some((column) => column[firstWord] & firstBit && column[secondWord] & secondBit)) continue;
       if (!isSignificant(first, second)) continue;
-      const next: Uint8Array[] = [];
-      let changed = false;
+      const kept: Uint32Array[] = [];
+      const created: Uint32Array[] = [];
       for (const column of columns) {
-        if (column[first] && column[second]) {
-          const withoutSecond = Uint8Array.from(column);
-          withoutSecond[second] = 0;
-          const withoutFirst = Uint8Array.from(column);
-          withoutFirst[first] = 0;
-          next.push(withoutSecond, withoutFirst);
-          changed = true;
-        } else next.push(column);
+        if (column[firstWord] & firstBit && column[secondWord] & secondBit) {
+          const withoutSecond = Uint32Array.from(column);
+          withoutSecond[secondWord] &= ~secondBit;
+          const withoutFirst = Uint32Array.from(column);
+          withoutFirst[firstWord] &= ~firstBit;
+          created.push(withoutSecond, withoutFirst);
+        } else kept.push(column);
       }
-      if (changed) columns = absorb(next);
+      // Only the new columns can be absorbed: each is a proper subset of a column that was not
+      // itself contained in any other, so no old column can lie inside a new one.
+      for (let index = 0; index < created.length; index++) {
+        const candidate = created[index];
+        const absorbed =
+          kept.some((column) => isSubset(candidate, column)) ||
+          created.some((column, other) => other !== index && isSubset(candidate, column) && (!isSubset(column, candidate) || other < index));
+        if (!absorbed) kept.push(candidate);
+        else created[index] = new Uint32Array(words);
+      }
+      columns = kept;
     }
   }
+  const has = (column: Uint32Array, treatment: number) => (column[treatment >>> 5] & (1 << (treatment & 31))) !== 0;
   const orderByMean = Array.from({ length: count }, (_, index) => index).sort((a, b) => means[b] - means[a] || a - b);
   const rank = new Int32Array(count);
   orderByMean.forEach((treatment, position) => (rank[treatment] = position));
   const memberRanks = columns.map((column) =>
-    Array.from(column.keys())
-      .filter((index) => column[index])
+    Array.from({ length: count }, (_, index) => index)
+      .filter((index) => has(column, index))
       .map((index) => rank[index])
       .sort((a, b) => a - b),
   );
@@ -66,28 +84,13 @@ export function compactLetterDisplay(means: ArrayLike<number>, isSignificant: (f
   const labels = new Array<string>(count).fill("");
   columnOrder.forEach((columnIndex, letterIndex) => {
     const letter = letterName(letterIndex);
-    columns[columnIndex].forEach((member, treatment) => {
-      if (member) labels[treatment] += letter;
-    });
+    for (let treatment = 0; treatment < count; treatment++) if (has(columns[columnIndex], treatment)) labels[treatment] += letter;
   });
   return labels;
 }
 
-function absorb(columns: Uint8Array[]): Uint8Array[] {
-  const kept: Uint8Array[] = [];
-  for (let index = 0; index < columns.length; index++) {
-    let absorbed = false;
-    for (let other = 0; other < columns.length && !absorbed; other++) {
-      if (other === index) continue;
-      if (isSubset(columns[index], columns[other]) && (!isSubset(columns[other], columns[index]) || other < index)) absorbed = true;
-    }
-    if (!absorbed) kept.push(columns[index]);
-  }
-  return kept;
-}
-
-function isSubset(inner: Uint8Array, outer: Uint8Array): boolean {
-  for (let index = 0; index < inner.length; index++) if (inner[index] && !outer[index]) return false;
+function isSubset(inner: Uint32Array, outer: Uint32Array): boolean {
+  for (let index = 0; index < inner.length; index++) if ((inner[index] & ~outer[index]) !== 0) return false;
   return true;
 }
 
