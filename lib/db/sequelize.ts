@@ -9,7 +9,11 @@ pg.types.setTypeParser(1082, (value: string) => value);
 
 const globalForDb = globalThis as unknown as { hoebenchSequelize?: Sequelize };
 
-export function createSequelize(databaseUrl: string, poolMax = 10): Sequelize {
+/**
+ * Model classes are process-wide, so only one connection may own them; a further one (a
+ * second pool in a test, say) passes bindModels: false and works through transactions.
+ */
+export function createSequelize(databaseUrl: string, poolMax = 10, options: { bindModels?: boolean } = {}): Sequelize {
   const sequelize = new Sequelize(databaseUrl, {
     dialect: "postgres",
     dialectModule: pg,
@@ -17,7 +21,7 @@ export function createSequelize(databaseUrl: string, poolMax = 10): Sequelize {
     pool: { max: poolMax, min: 0, idle: 10_000, acquire: 20_000 },
     define: { underscored: true },
   });
-  initModels(sequelize);
+  if (options.bindModels !== false) initModels(sequelize);
   return sequelize;
 }
 

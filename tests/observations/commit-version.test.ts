@@ -1,0 +1,122 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { QueryTypes } from "sequelize";
+import { commitVersion, type NewValue } from "@/lib/observations/commit-version";
+import { AppError } from "@/lib/errors";
+import { AuditEvent, DatasetVersion, Observation } from "@/models";
+import { createSequelize } from "@/lib/db/sequelize";
+import { createTrialFixture, type TrialFixture } from "../factories/trials";
+import { testDatabase } from "../support/database";
+import { testEnvironment } from "../support/environment";
+
+function valuesFor(fixture: TrialFixture, value: (plotNumber: number, quadrat: number) => number): NewValue[] {
+  return fixture.plots.flatMap((plot) => [1, 2].map((quadrat) => ({ plotNumber: plot.number, quadrat, species: "", value: value(plot.number, quadrat) })));
+}
+
+async function currentValues(assessmentId: string) {
+  return Observation.findAll({ where: { assessmentId, replacedInVersionId: null }, order: [["id", "ASC"]] });
+}
+
+describe("committing a version of an assessment's data", () => {
+  it("writes version 1 with every value, then version 2 replaces it without overwriting", async () => {
+    const fixture = await createTrialFixture();
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload" as const };
+    const first = await commitVersion(testDatabase(), { ...request, values: valuesFor(fixture, () => 5) });
+    expect(first).toMatchObject({ number: 1, rowsAdded: 24, rowsReplaced: 0 });
+    const second = await commitVersion(testDatabase(), { ...request, values: valuesFor(fixture, (plot) => plot % 10) });
+    expect(second).toMatchObject({ number: 2, rowsAdded: 24, rowsReplaced: 24 });
+
+    const current = await currentValues(fixture.assessment.id);
+    expect(current).toHaveLength(24);
+    expect(current.every((row) => row.addedInVersionId === second.id)).toBe(true);
+    const all = await Observation.count({ where: { assessmentId: fixture.assessment.id } });
+    expect(all).toBe(48);
+    const audit = await AuditEvent.findAll({ where: { trialId: fixture.trial.id }, order: [["id", "ASC"]] });
+    expect(audit.map((event) => event.summary)).toEqual([
+      "Version 1: 24 values for the whole assessment (0 replaced)",
+      "Version 2: 24 values for the whole assessment (24 replaced)",
+    ]);
+  });
+
+  it("replaces only the named plot for a per-plot entry", async () => {
+    const fixture = await createTrialFixture();
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id };
+    await commitVersion(testDatabase(), { ...request, source: "upload", values: valuesFor(fixture, () => 5) });
+    const manual = await commitVersion(testDatabase(), {
+      ...request,
+      source: "manual",
+      replacePlotNumbers: [102],
+      values: [{ plotNumber: 102, quadrat: 1, species: "", value: 9 }, { plotNumber: 102, quadrat: 2, species: "", value: 11 }],
+    });
+    expect(manual).toMatchObject({ number: 2, rowsAdded: 2, rowsReplaced: 2 });
+    const current = await currentValues(fixture.assessment.id);
+    expect(current).toHaveLength(24);
+    expect(current.filter((row) => row.value !== 5).map((row) => row.value).sort()).toEqual([11, 9]);
+  });
+
+  it("asks for a reason once the trial is locked, and marks the change for the reviewer", async () => {
+    const fixture = await createTrialFixture({ status: "locked" });
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "manual" as const, values: valuesFor(fixture, () => 1) };
+    await expect(commitVersion(testDatabase(), request)).rejects.toMatchObject({ code: "INVALID_INPUT", message: expect.stringContaining("say why the data change") });
+    expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    await commitVersion(testDatabase(), { ...request, reason: "Quadrat 2 of plot 101 was keyed as 1; field sheet says 7." });
+    const [event] = await AuditEvent.findAll({ where: { trialId: fixture.trial.id } });
+    expect(event.afterLock).toBe(true);
+    expect(event.reason).toBe("Quadrat 2 of plot 101 was keyed as 1; field sheet says 7.");
+  });
+
+  it("refuses any change to a published trial and writes nothing", async () => {
+    const fixture = await createTrialFixture({ status: "published" });
+    const attempt = commitVersion(testDatabase(), { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "manual", values: valuesFor(fixture, () => 1), reason: "x" });
+    await expect(attempt).rejects.toBeInstanceOf(AppError);
+    await expect(attempt).rejects.toMatchObject({ code: "CONFLICT" });
+    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+  });
+
+  it("turns two commits at once into two ordered versions, never a mix", async () => {
+    const fixture = await createTrialFixture();
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload" as const };
+    const second = createSequelize(testEnvironment().databaseUrl, 2, { bindModels: false });
+    try {
+      const [a, b] = await Promise.all([
+        commitVersion(testDatabase(), { ...request, values: valuesFor(fixture, () => 1) }),
+        commitVersion(second, { ...request, values: valuesFor(fixture, () => 2) }),
+      ]);
+      expect([a.number, b.number].sort()).toEqual([1, 2]);
+      const last = a.number === 2 ? a : b;
+      const current = await currentValues(fixture.assessment.id);
+      expect(current).toHaveLength(24);
+      expect(new Set(current.map((row) => row.addedInVersionId))).toEqual(new Set([last.id]));
+      expect(new Set(current.map((row) => row.value)).size).toBe(1);
+    } finally {
+      await second.close();
+    }
+  });
+
+  it("leaves nothing behind when the connection dies in the middle of a commit", async () => {
+    const fixture = await createTrialFixture({ treatments: 10, blocks: 10, quadratsPerPlot: 50 });
+    const victim = createSequelize(testEnvironment().databaseUrl, 1, { bindModels: false });
+    const many: NewValue[] = [];
+    for (const plot of fixture.plots) for (let quadrat = 1; quadrat <= 50; quadrat += 1) for (const species of ["a", "b", "c", "d", "e", "f", "g", "h"]) many.push({ plotNumber: plot.number, quadrat, species, value: quadrat });
+    const commit = commitVersion(victim, { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload", values: many });
+    const killer = testDatabase();
+    let killed = 0;
+    for (let attempt = 0; attempt < 400 && killed === 0; attempt += 1) {
+      const rows = await killer.query<{ killed: boolean }>(
+        "SELECT pg_terminate_backend(pid) AS killed FROM pg_stat_activity WHERE query LIKE 'INSERT INTO observations%' AND pid <> pg_backend_pid()",
+        { type: QueryTypes.SELECT },
+      );
+      killed = rows.filter((row) => row.killed).length;
+      if (!killed) await new Promise((resolve) => setTimeout(resolve, 5));
+    }
+    expect(killed).toBe(1);
+    await expect(commit).rejects.toThrow();
+    await victim.close().catch(() => {});
+    expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    expect(await AuditEvent.count({ where: { trialId: fixture.trial.id } })).toBe(0);
+  }, 60_000);
+});
+
+afterAll(async () => {
+  await testDatabase().close();
+});
