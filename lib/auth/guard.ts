@@ -17,7 +17,7 @@ interface RouteSpec<P extends Schema | undefined, Q extends Schema | undefined, 
   query?: Q;
   body?: B;
   /** Names the trial a trial permission is checked against. */
-  trialId?: (input: { params: Parsed<P>; query: Parsed<Q>; body: Parsed<B> }) => string;
+  trialId?: (input: { params: Parsed<P>; query: Parsed<Q>; body: Parsed<B> }) => string | Promise<string>;
 }
 
 export interface RouteContext<P, Q, B> {
@@ -61,7 +61,7 @@ export function route<P extends Schema | undefined = undefined, Q extends Schema
       const params = validate<P>(spec.params as P, await segment?.params, "address");
       const query = validate<Q>(spec.query as Q, Object.fromEntries(request.nextUrl.searchParams), "query");
       const body = validate<B>(spec.body as B, spec.body ? await readJson(request) : undefined, "request");
-      const trialId = spec.trialId?.({ params, query, body });
+      const trialId = await spec.trialId?.({ params, query, body });
       const trial = await authorize(user, spec.permission, trialId);
       return await handle({ request, user, params, query, body, trial });
     } catch (error) {
@@ -76,7 +76,7 @@ export type ActionResult<T> =
 
 /** The same order for server actions; the result is plain data a form can show. */
 export function action<S extends Schema, T>(
-  spec: { permission: Permission; input: S; trialId?: (input: z.output<S>) => string },
+  spec: { permission: Permission; input: S; trialId?: (input: z.output<S>) => string | Promise<string> },
   handle: (context: { user: SessionUser; input: z.output<S>; trial?: Trial }) => Promise<T>,
 ) {
   return async (raw: unknown): Promise<ActionResult<T>> => {
@@ -84,7 +84,7 @@ export function action<S extends Schema, T>(
       const user = await currentUser();
       if (!user) throw new AppError("UNAUTHENTICATED", "Please sign in to continue.");
       const input = validate(spec.input, raw, "form") as z.output<S>;
-      const trial = await authorize(user, spec.permission, spec.trialId?.(input));
+      const trial = await authorize(user, spec.permission, await spec.trialId?.(input));
       return { ok: true, data: await handle({ user, input, trial }) };
     } catch (error) {
       if (error instanceof AppError) {
