@@ -82,7 +82,7 @@ export interface TrialAnalysis {
  *
  * @example
  * analyzeTrial(rows, { design: "rcbd", response: "hardness", treatment: "tip", block: "coupon" }).anova[1]
- * // { source: "treatment", df: 3, ss: 0.385, ms: 0.128333…, f: 14.4375, p: 0.000871272071111… }
+ * // { source: "treatment", df: 3, ss: 0.385, ms: 0.12833333333333333, f: 14.437499999999993, p: 0.0008712720711116696 }
  */
 export function analyzeTrial(rows: ReadonlyArray<TrialRow>, optionsInput: TrialOptionsInput): TrialAnalysis {
   const parsed = trialOptionsSchema.safeParse(optionsInput);

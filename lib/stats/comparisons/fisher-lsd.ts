@@ -15,7 +15,7 @@ import { studentTQuantile } from "../distributions/student-t-quantile";
  * (1984) §5.1.1.
  *
  * @example
- * fisherLsd(hardnessComparisons, 9, 0.05) // 0.150810477519881
+ * fisherLsd(hardnessComparisons, 9, 0.05) // 0.1508104775198807 (R: 0.150810477519881)
  */
 export function fisherLsd(comparisons: ReadonlyArray<PairwiseComparison>, errorDf: number, alpha: number): number | null {
   if (comparisons.length === 0) return null;

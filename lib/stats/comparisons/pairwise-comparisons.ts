@@ -31,7 +31,9 @@ export interface PairwiseComparison {
  *
  * @example
  * // hardness RCBD, tip1 vs tip4
- * pairwiseComparisons(fit)[2] // { a: "tip1", b: "tip4", diff: -0.3, se: 0.0667, pLsd: 0.00149, pTukey: 0.00666, … }
+ * pairwiseComparisons(fit)[2]
+ * // { a: "tip1", b: "tip4", diff: -0.3000000000000007, se: 0.06666666666666676, t: -4.500000000000004,
+ * //   pLsd: 0.0014889494154117287, pTukey: 0.006658314691186162 }
  */
 export function pairwiseComparisons(fit: ModelFit): PairwiseComparison[] {
   const levels = fit.treatment.levels;

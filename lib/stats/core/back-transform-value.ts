@@ -11,7 +11,7 @@ import type { ResponseTransform } from "./transform-value";
  * Reference: Gomez & Gomez (1984) §7.2.2.
  *
  * @example
- * backTransformValue(0.5235987755982989, "asin-sqrt") // 25.000000000000004
+ * backTransformValue(0.5235987755982989, "asin-sqrt") // 25
  */
 export function backTransformValue(value: number, transform: ResponseTransform): number {
   switch (transform) {

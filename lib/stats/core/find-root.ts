@@ -12,7 +12,7 @@
  * Derivatives, ch. 4 (procedure zero).
  *
  * @example
- * findRoot((x) => x * x - 2, 0, 2) // 1.4142135623730951
+ * findRoot((x) => x * x - 2, 0, 2) // 1.414213562373095
  */
 export function findRoot(
   f: (x: number) => number,

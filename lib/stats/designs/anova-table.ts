@@ -22,7 +22,7 @@ export interface AnovaTerm {
  *
  * @example
  * anovaTable([{ source: "treatment", df: 2, ss: 10 }], 6, 3)
- * // [{ source: "treatment", df: 2, ss: 10, ms: 5, f: 10, p: 0.01234567901234569 },
+ * // [{ source: "treatment", df: 2, ss: 10, ms: 5, f: 10, p: 0.012289485662266697 },
  * //  { source: "residual", df: 6, ss: 3, ms: 0.5 }]
  */
 export function anovaTable(terms: AnovaTerm[], dfResidual: number, sumOfSquaresResidual: number): AnovaRow[] {

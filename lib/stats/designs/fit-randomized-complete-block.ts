@@ -27,8 +27,9 @@ import type { ModelFit } from "./model-types";
  * Searle, Speed & Milliken (1980) for the lsmeans.
  *
  * @example
- * // hardness data (Montgomery): treatment SS 0.385, block SS 0.825, residual SS 0.08
- * fitRandomizedCompleteBlock(hardness, tips, coupons).anova.map((row) => row.ss) // [0.825, 0.385, 0.08]
+ * // hardness data (Montgomery); R: block 0.825, treatment 0.385, residual 0.08
+ * fitRandomizedCompleteBlock(hardness, tips, coupons).anova.map((row) => row.ss)
+ * // [0.8249999999999961, 0.385000000000001, 0.08000000000000024]
  */
 export function fitRandomizedCompleteBlock(response: Float64Array, treatment: EncodedFactor, block: EncodedFactor): ModelFit {
   const treatmentCount = treatment.levels.length;

@@ -31,8 +31,11 @@ export interface LeastSquaresMeans {
  * The American Statistician 34:216-221; the default of R's emmeans.
  *
  * @example
- * // RCBD with a lost plot: lsmean of a treatment = its fitted value averaged over blocks
- * leastSquaresMeans(fit, treatment, blocks.levels.map((_, b) => ({ levels: new Map([[blocks, b]]), weight: 1 / blocks.levels.length })))
+ * // two blocks, treatment b lost in block B2: y(a,B1) = 1, y(b,B1) = 3, y(a,B2) = 2
+ * const blocks = encodeFactor(["B1", "B1", "B2"]); const treatment = encodeFactor(["a", "b", "a"]);
+ * const fit = fitLinearModel(new Float64Array([1, 3, 2]), [{ source: "block", factors: [blocks] }, { source: "treatment", factors: [treatment] }]);
+ * leastSquaresMeans(fit, treatment, [0, 1].map((b) => ({ levels: new Map([[blocks, b]]), weight: 0.5 })))
+ * // { lsmeans: [1.4999999999999996, 3.5], covariance: [0.5, 1.1102230246251565e-16, 1.1102230246251565e-16, 1.5000000000000009] }
  */
 export function leastSquaresMeans(
   fit: LinearModelFit,

@@ -11,7 +11,7 @@ import type { TailProbabilities } from "./incomplete-beta";
  * Reference: Abramowitz & Stegun (1964) 26.4.19.
  *
  * @example
- * chiSquareCdf(3.841458820694124, 1).upper // 0.05
+ * chiSquareCdf(3.841458820694124, 1).upper // 0.05000000000000013
  */
 export function chiSquareCdf(x: number, df: number): TailProbabilities {
   return incompleteGamma(df / 2, x / 2);

@@ -13,7 +13,7 @@ import { incompleteBeta, type TailProbabilities } from "./incomplete-beta";
  * Reference: Abramowitz & Stegun (1964) 26.6.2.
  *
  * @example
- * fCdf(34.7022820554917, 5, 66).upper // 3.18258372614518e-17 (R: pf(..., lower.tail = FALSE))
+ * fCdf(34.7022820554917, 5, 66).upper // 3.182583726145175e-17 (R: pf(..., lower.tail = FALSE) = 3.18258372614516e-17)
  */
 export function fCdf(f: number, df1: number, df2: number): TailProbabilities {
   if (Number.isNaN(f) || !(df1 > 0) || !(df2 > 0)) return { lower: Number.NaN, upper: Number.NaN };

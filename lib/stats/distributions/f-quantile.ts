@@ -13,7 +13,7 @@ import { fCdf } from "./f-cdf";
  * Reference: Brent (1973) ch. 4; Abramowitz & Stegun (1964) 26.6.
  *
  * @example
- * fQuantile(0.05, 3, 9) // 3.8625483576247648 (R: qf(0.95, 3, 9))
+ * fQuantile(0.05, 3, 9) // 3.8625483576247683 (R: qf(0.95, 3, 9))
  */
 export function fQuantile(upperTailProbability: number, df1: number, df2: number): number {
   if (!(upperTailProbability > 0 && upperTailProbability < 1) || !(df1 > 0) || !(df2 > 0)) return Number.NaN;

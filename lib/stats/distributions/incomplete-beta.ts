@@ -31,7 +31,7 @@ const maximumIterations = 20000;
  * Recipes, 3rd ed., §6.4; NIST DLMF 8.17.22.
  *
  * @example
- * incompleteBeta(0.5, 2, 3) // { lower: 0.6875, upper: 0.3125 }
+ * incompleteBeta(0.5, 2, 3) // { lower: 0.6875000000000007, upper: 0.3124999999999994 } (exact: 11/16, 5/16)
  */
 export function incompleteBeta(x: number, a: number, b: number, complement: number = 1 - x): TailProbabilities {
   if (!(a > 0) || !(b > 0) || Number.isNaN(x)) return { lower: Number.NaN, upper: Number.NaN };

@@ -18,7 +18,7 @@ const maximumIterations = 100000;
  * NIST DLMF 8.7.1 and 8.9.2.
  *
  * @example
- * incompleteGamma(1, 2) // { lower: 0.8646647167633873, upper: 0.1353352832366127 }
+ * incompleteGamma(1, 2) // { lower: 0.8646647167633875, upper: 0.13533528323661245 } (exact: 1 - e⁻², e⁻²)
  */
 export function incompleteGamma(a: number, x: number): TailProbabilities {
   if (!(a > 0) || Number.isNaN(x)) return { lower: Number.NaN, upper: Number.NaN };

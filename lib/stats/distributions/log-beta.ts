@@ -16,7 +16,7 @@ const halfLogTwoPi = 0.9189385332046727;
  * Abramowitz & Stegun (1964) 6.1.40.
  *
  * @example
- * logBeta(0.5, 0.5) // 1.1447298858494002 (= log π)
+ * logBeta(0.5, 0.5) // 1.1447298858493955 (log π = 1.1447298858494002)
  */
 export function logBeta(a: number, b: number): number {
   const small = Math.min(a, b);

@@ -15,7 +15,7 @@ const halfLogTwoPi = 0.9189385332046727; // ½ log(2π)
  * Reference: Abramowitz & Stegun (1964) 6.1.15 and 6.1.40.
  *
  * @example
- * logGamma(0.5) // 0.5723649429247001 (= log √π)
+ * logGamma(0.5) // 0.5723649429246986 (log √π = 0.5723649429247001)
  */
 export function logGamma(x: number): number {
   if (!(x > 0)) return Number.NaN;

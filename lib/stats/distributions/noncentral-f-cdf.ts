@@ -19,7 +19,7 @@ import { logGamma } from "./log-gamma";
  * Applied Statistics 39:311-312 (the method of R's pnbeta).
  *
  * @example
- * noncentralFCdf(3, 3, 12, 5).lower // 0.6184 (R: pf(3, 3, 12, ncp = 5))
+ * noncentralFCdf(3, 3, 12, 5).lower // 0.596423772414512 (R: pf(3, 3, 12, ncp = 5) = 0.5964237723192717)
  */
 export function noncentralFCdf(f: number, df1: number, df2: number, noncentrality: number): TailProbabilities {
   if (Number.isNaN(f) || !(df1 > 0) || !(df2 > 0) || !(noncentrality >= 0)) {

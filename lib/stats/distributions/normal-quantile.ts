@@ -13,7 +13,7 @@ import { normalCdf } from "./normal-cdf";
  * the normal distribution. Applied Statistics 37:477-484.
  *
  * @example
- * normalQuantile(0.975) // 1.959963984540054
+ * normalQuantile(0.975) // 1.9599639845400538
  */
 export function normalQuantile(p: number): number {
   if (Number.isNaN(p) || p < 0 || p > 1) return Number.NaN;

@@ -12,7 +12,7 @@
  * 6.1.40.
  *
  * @example
- * stirlingCorrection(10) // 0.008330563433362871
+ * stirlingCorrection(10) // 0.00833056343336287
  */
 export function stirlingCorrection(x: number): number {
   const inverse = 1 / x;

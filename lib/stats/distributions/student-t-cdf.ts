@@ -14,7 +14,7 @@ import { normalCdf } from "./normal-cdf";
  * Reference: Abramowitz & Stegun (1964) 26.7.1 and 26.5.27.
  *
  * @example
- * studentTCdf(2.228138851986274, 10) // { lower: 0.975, upper: 0.025 } (to 1e-15)
+ * studentTCdf(2.228138851986274, 10) // { lower: 0.9750000000000001, upper: 0.024999999999999925 }
  */
 export function studentTCdf(t: number, df: number): TailProbabilities {
   if (Number.isNaN(t) || !(df > 0)) return { lower: Number.NaN, upper: Number.NaN };

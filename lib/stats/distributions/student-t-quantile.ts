@@ -14,7 +14,7 @@ import { studentTCdf } from "./student-t-cdf";
  * (1964) 26.7.
  *
  * @example
- * studentTQuantile(0.975, 10) // 2.228138851986274
+ * studentTQuantile(0.975, 10) // 2.2281388519862726
  */
 export function studentTQuantile(p: number, df: number): number {
   if (Number.isNaN(p) || p < 0 || p > 1 || !(df > 0)) return Number.NaN;

@@ -49,7 +49,7 @@ const inverseSqrtTwoPi = 0.398942280401432677939946059934;
  * Computation and Simulation 30:1-15.
  *
  * @example
- * studentizedRangeCdf(3.5, 4, 20) // 0.9130857 (R: ptukey(3.5, 4, 20))
+ * studentizedRangeCdf(3.5, 4, 20) // 0.9050415494514413 (R: ptukey(3.5, 4, 20) = 0.9050415494514433)
  */
 export function studentizedRangeCdf(q: number, numberOfMeans: number, df: number, ranges = 1): number {
   if (Number.isNaN(q) || Number.isNaN(numberOfMeans) || Number.isNaN(df)) return Number.NaN;

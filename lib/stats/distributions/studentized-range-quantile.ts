@@ -20,7 +20,7 @@ import { studentizedRangeCdf } from "./studentized-range-cdf";
  * 23:96-97.
  *
  * @example
- * studentizedRangeQuantile(0.95, 3, 10) // 3.877 (table value 3.88)
+ * studentizedRangeQuantile(0.95, 3, 10) // 3.876776750017843 (table value 3.88)
  */
 export function studentizedRangeQuantile(p: number, numberOfMeans: number, df: number, ranges = 1): number {
   if (!(p > 0 && p < 1) || numberOfMeans < 2 || df < 2) return Number.NaN;

@@ -19,7 +19,7 @@ export interface AreaYield {
  * Reference: NIST SP 811 (2008) Appendix B for the exact unit factors.
  *
  * @example
- * plotYieldPerArea(6.5, 12) // { tonnesPerHectare: 5.416666666666667, poundsPerAcre: 4832.636…}
+ * plotYieldPerArea(6.5, 12) // { tonnesPerHectare: 5.416666666666666, poundsPerAcre: 4832.636908773398 }
  */
 export function plotYieldPerArea(yieldKilograms: number, harvestedAreaSquareMetres: number): AreaYield {
   if (!(harvestedAreaSquareMetres > 0)) throw new StatsInputError("yield conversion requires a harvested area above zero");

@@ -13,7 +13,7 @@ import { StatsInputError } from "../errors";
  * reporting weed control trials. Indian Journal of Agronomy 14:96-98.
  *
  * @example
- * weedIndex(5.2, 4.68) // 10.000000000000009
+ * weedIndex(5.2, 4.68) // 10.000000000000007
  */
 export function weedIndex(yieldWeedFree: number, yieldTreated: number): number {
   if (!(yieldWeedFree > 0)) throw new StatsInputError("weed index requires a weed-free yield above zero");

@@ -48,7 +48,7 @@ export interface BlocksNeededResult {
  * distribution; EPPO Standard PP 1/152.
  *
  * @example
- * blocksNeeded({ treatments: 6, cvPercent: 15, difference: 30, differenceKind: "percent" }).blocks // 8 (power 0.829)
+ * blocksNeeded({ treatments: 6, cvPercent: 15, difference: 30, differenceKind: "percent" }).blocks // 8 (power 0.8291005120941988)
  */
 export function blocksNeeded(input: BlocksNeededInput): BlocksNeededResult {
   const { treatments, cvPercent, difference, differenceKind } = input;

@@ -30,10 +30,12 @@ export interface AssumptionEvidence {
  * 189:732-735; Gomez & Gomez (1984) §7.2.2 (choice of transformation).
  *
  * @example
- * assumptionAdvice({ rawValues: counts, groupMeans: [2, 8, 30], groupVariances: [2, 9, 33], shapiroP: 0.01,
- *   leveneP: 0.004, alpha: 0.05, transform: "none", design: "crd" })
+ * assumptionAdvice({ rawValues: [1, 3, 2, 8, 6, 9, 25, 33, 31], groupMeans: [2, 8, 30], groupVariances: [2, 9, 33],
+ *   shapiroP: 0.01, leveneP: 0.004, alpha: 0.05, transform: "none", design: "crd" })
  * // ["Variances differ between treatments (Brown-Forsythe p = 0.004).",
- * //  "The variance rises in proportion to the mean, as for counts: analyse √y (--transform sqrt).", …]
+ * //  "Residuals depart from a normal distribution (Shapiro-Wilk p = 0.010).",
+ * //  "The variance rises in proportion to the mean, as for counts: analyse √y (--transform sqrt).",
+ * //  "If a transformation does not help, use a rank-based test such as Kruskal-Wallis."]
  */
 export function assumptionAdvice(evidence: AssumptionEvidence): string[] {
   const advice: string[] = [];

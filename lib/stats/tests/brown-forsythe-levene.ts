@@ -28,7 +28,7 @@ export interface LeveneResult {
  *
  * @example
  * // hardness data across the four tips
- * brownForsytheLevene(hardness, tips) // { f: 0.486486…, p: 0.697996… }
+ * brownForsytheLevene(hardness, tips) // { f: 0.4864864864864868, dfTreatment: 3, dfResidual: 12, p: 0.6979963001965435 }
  */
 export function brownForsytheLevene(values: Float64Array, groups: EncodedFactor): LeveneResult {
   const groupCount = groups.levels.length;

@@ -34,7 +34,10 @@ export interface EquivalenceResult {
  * bioavailability. J. Pharmacokinet. Biopharm. 15:657-680.
  *
  * @example
- * equivalenceTost(fit, "tip1", 0.2, 0.05)[0] // tip2 vs tip1: { diff: 0.025, p: 0.0053, equivalent: true, … }
+ * equivalenceTost(hardnessFit, "tip1", 0.2, 0.05)[0]
+ * // { treatment: "tip2", reference: "tip1", diff: 0.02500000000000213, se: 0.06666666666666676,
+ * //   ci90: [-0.09720752884374728, 0.14720752884375155], pLower: 0.004095855281975638,
+ * //   pUpper: 0.013791931015468014, p: 0.013791931015468014, equivalent: true }
  */
 export function equivalenceTost(fit: ModelFit, reference: string, margin: number, alpha: number): EquivalenceResult[] {
   if (!(margin > 0)) throw new StatsInputError("equivalence test requires a positive margin");

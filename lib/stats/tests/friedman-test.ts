@@ -25,7 +25,7 @@ export interface FriedmanResult {
  * D. A. (1973) Nonparametric Statistical Methods, §7.1; R friedman.test.
  *
  * @example
- * friedmanTest(hardness, tips, coupons) // { chi2: 8.846153846153847, df: 3, p: 0.0314078541738604 }
+ * friedmanTest(hardness, tips, coupons) // { chi2: 8.846153846153847, df: 3, p: 0.03140785417386048 }
  */
 export function friedmanTest(values: Float64Array, treatment: EncodedFactor, block: EncodedFactor): FriedmanResult {
   const treatmentCount = treatment.levels.length;

@@ -19,7 +19,9 @@ import type { TTestResult } from "./t-test-types";
  * R t.test(paired = TRUE).
  *
  * @example
- * pairedTTest("drug1", "drug2", drug1, drug2) // sleep data: { t: -4.062127683382037, df: 9, p: 0.00283289019738427, … }
+ * pairedTTest("drug1", "drug2", drug1, drug2) // sleep data (R datasets::sleep)
+ * // { a: "drug1", b: "drug2", t: -4.062127683382037, df: 9, p: 0.0028328901973842793,
+ * //   meanDiff: -1.58, ci: [-2.4598857632769837, -0.7001142367230166] }
  */
 export function pairedTTest(
   labelA: string,

@@ -20,7 +20,9 @@ import type { TTestResult } from "./t-test-types";
  * 34:28-35; R t.test(var.equal = FALSE).
  *
  * @example
- * welchTTest("a", "b", [1, 2, 3, 4], [2, 4, 6, 8, 10]) // { t: -2.4, df: 5.6, … } (see tests for R values)
+ * welchTTest("a", "b", [1, 2, 3, 4], [2, 4, 6, 8, 10])
+ * // { a: "a", b: "b", t: -2.2514363231593695, df: 5.520787746170677, p: 0.06913359319239236,
+ * //   meanDiff: -3.5, ci: [-7.385368080514043, 0.3853680805140436] }
  */
 export function welchTTest(
   labelA: string,
