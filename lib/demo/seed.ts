@@ -1,7 +1,8 @@
 import type { Sequelize } from "sequelize";
 import { hashPassword } from "@/lib/auth/password";
-import { Membership, Site, Trial, User } from "@/models";
-import { demoMemberships, demoSites, demoTrials, demoUsers, DEMO_PASSWORD } from "./scenario";
+import { randomizeLayout } from "@/lib/layout/randomize";
+import { Assessment, Membership, Plot, Site, Treatment, Trial, User } from "@/models";
+import { demoMemberships, demoProtocols, demoSites, demoTrials, demoUsers, DEMO_PASSWORD } from "./scenario";
 
 /** Seeds the demo into an empty database; a database with any user is left as it is. */
 export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "already-present"> {
@@ -36,12 +37,29 @@ export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "alread
             quadratAreaM2: 0.25,
             plantingDate: demo.plantingDate,
             randomSeed: demo.randomSeed,
+            serpentine: demoProtocols[demo.key]?.serpentine ?? false,
             status: demo.status,
             ownerId: users.get(demo.owner)!.id,
           },
           { transaction },
         ),
       );
+    }
+    for (const [key, protocol] of Object.entries(demoProtocols)) {
+      const trial = trials.get(key)!;
+      const treatments: Treatment[] = [];
+      for (const [index, treatment] of protocol.treatments.entries()) {
+        treatments.push(await Treatment.create({ ...treatment, trialId: trial.id, position: index + 1, equipmentCost: null, equipmentLifeYears: null, equipmentHaPerYear: null }, { transaction }));
+      }
+      // The same call the app makes, so the demo layout is what the stored seed gives.
+      const planned = randomizeLayout({ design: trial.design, treatmentCount: treatments.length, blocks: trial.blocks, seed: trial.randomSeed, serpentine: trial.serpentine });
+      await Plot.bulkCreate(
+        planned.map(({ treatmentIndex, ...plot }) => ({ ...plot, trialId: trial.id, treatmentId: treatments[treatmentIndex].id })),
+        { transaction },
+      );
+      for (const [index, assessment] of protocol.assessments.entries()) {
+        await Assessment.create({ ...assessment, trialId: trial.id, position: index + 1, plannedDate: null }, { transaction });
+      }
     }
     for (const demo of demoMemberships) {
       await Membership.create({ trialId: trials.get(demo.trial)!.id, userId: users.get(demo.user)!.id, role: demo.role }, { transaction });
