@@ -17,6 +17,7 @@ const homeLabel: Record<Role, string> = {
 };
 
 const items: NavItem[] = [
+  { href: "/trials", label: "Trials", permission: "trial:list" },
   { href: "/admin/users", label: "Users", permission: "user:manage" },
   { href: "/admin/mail", label: "Caught mail", permission: "mail:read-caught" },
 ];
