@@ -11,9 +11,10 @@ export function loadFixture(name: string): Record<string, any> {
   return JSON.parse(readFileSync(path.join(fixtureDirectory, `${name}.json`), "utf8"));
 }
 
+/** Reads a fixture CSV as text cells; lines starting with "#" are provenance comments (NIST data). */
 export function loadRows(file: string): Record<string, string>[] {
   const text = readFileSync(path.join(fixtureDirectory, file), "utf8");
-  return Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true, dynamicTyping: false }).data;
+  return Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true, dynamicTyping: false, comments: "#" }).data;
 }
 
 export function analyzeFixture(name: string): { actual: Record<string, any>; expected: Record<string, any>; fixture: Record<string, any> } {
