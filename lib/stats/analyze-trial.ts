@@ -18,6 +18,7 @@ import { compactLetterDisplay } from "./comparisons/compact-letter-display";
 import { shapiroWilk } from "./tests/shapiro-wilk";
 import { brownForsytheLevene } from "./tests/brown-forsythe-levene";
 import { friedmanTest } from "./tests/friedman-test";
+import { kruskalWallis } from "./tests/kruskal-wallis";
 import { pairedTTest } from "./tests/paired-t-test";
 import { welchTTest } from "./tests/welch-t-test";
 import type { TTestResult } from "./tests/t-test-types";
@@ -51,6 +52,8 @@ export interface TrialAnalysis {
   comparisons?: Array<{ a: string; b: string; diff: number; se: number; pLsd: number; pTukey: number }>;
   assumptions?: { shapiroWilk: { w: number; p: number } | null; levene: { f: number; p: number } | null };
   friedman?: { chi2: number; df: number; p: number };
+  /** Completely randomized designs only: the rank-based alternative to the one-way ANOVA. */
+  kruskalWallis?: { chi2: number; df: number; p: number };
   percentControl?: Array<{ treatment: string; percent: number }>;
   equivalence?: {
     margin: number;
@@ -71,7 +74,7 @@ export interface TrialAnalysis {
  * table, grand mean and CV%, lsmeans with SEs and back-transformed values,
  * Fisher LSD and Tukey(-Kramer) comparisons with compact letters,
  * Shapiro-Wilk on residuals, Brown-Forsythe across treatments, Friedman for
- * complete blocks, percent control and TOST equivalence on request, plain
+ * complete blocks, Kruskal-Wallis for completely randomized designs, percent control and TOST equivalence on request, plain
  * advice and a residual-df check.
  *
  * Assumptions: see each design and test; treatment and block values are
@@ -165,6 +168,11 @@ export function analyzeTrial(rows: ReadonlyArray<TrialRow>, optionsInput: TrialO
   if (options.design === "rcbd" && options.site === undefined) {
     const friedman = attempt(() => friedmanTest(analysed, treatment, factor(options.block)));
     if (friedman) result.friedman = friedman;
+  }
+  if (options.design === "crd") {
+    // Ranks of the raw values: the offered transformations are monotone, so they would not change them.
+    const kruskal = attempt(() => kruskalWallis(plots.rawValues, treatment));
+    if (kruskal) result.kruskalWallis = kruskal;
   }
   if (options.control !== undefined) result.percentControl = percentControl(plots.rawValues, treatment, options.control);
   if (options.reference !== undefined && options.margin !== undefined) {

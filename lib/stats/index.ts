@@ -40,6 +40,7 @@ export { compactLetterDisplay } from "./comparisons/compact-letter-display";
 export { shapiroWilk } from "./tests/shapiro-wilk";
 export { brownForsytheLevene } from "./tests/brown-forsythe-levene";
 export { friedmanTest } from "./tests/friedman-test";
+export { kruskalWallis, type KruskalWallisResult } from "./tests/kruskal-wallis";
 export { pairedTTest } from "./tests/paired-t-test";
 export { welchTTest } from "./tests/welch-t-test";
 export type { TTestResult } from "./tests/t-test-types";

@@ -4,8 +4,8 @@ suppressPackageStartupMessages({
   library(jsonlite)
 })
 fixture_dir <- "tests/fixtures/stats"
-write_fixture <- function(name, value) {
-  value$generated_by <- paste0("scripts/r/", name, ".R with ", R.version.string)
+write_fixture <- function(name, value, script = name) {
+  value$generated_by <- paste0("scripts/r/", script, ".R with ", R.version.string)
   writeLines(toJSON(value, digits = NA, auto_unbox = TRUE, pretty = TRUE, null = "null", na = "null"),
              file.path(fixture_dir, paste0(name, ".json")))
 }

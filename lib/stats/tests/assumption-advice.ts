@@ -21,8 +21,9 @@ export interface AssumptionEvidence {
  * counts) suggests √y, b near 2 or more (sd ∝ mean) suggests log(y + 1), the
  * power transformation y^(1 - b/2) being the rule. Percentages in 0-100
  * with heterogeneous variances suggest asin √(y/100). Non-normal residuals
- * (Shapiro-Wilk p < α) suggest a transformation or, for complete blocks, the
- * Friedman test.
+ * (Shapiro-Wilk p < α) suggest a transformation or a rank test: Friedman for
+ * complete blocks, Kruskal-Wallis for completely randomized designs (both
+ * reported by analyzeTrial).
  *
  * Assumptions: advisory only; never changes the analysis.
  *
@@ -35,7 +36,7 @@ export interface AssumptionEvidence {
  * // ["Variances differ between treatments (Brown-Forsythe p = 0.004).",
  * //  "Residuals depart from a normal distribution (Shapiro-Wilk p = 0.010).",
  * //  "The variance rises in proportion to the mean, as for counts: analyse √y (--transform sqrt).",
- * //  "If a transformation does not help, use a rank-based test such as Kruskal-Wallis."]
+ * //  "If a transformation does not help, the Kruskal-Wallis rank test (reported) does not assume normality."]
  */
 export function assumptionAdvice(evidence: AssumptionEvidence): string[] {
   const advice: string[] = [];
@@ -63,7 +64,9 @@ export function assumptionAdvice(evidence: AssumptionEvidence): string[] {
     advice.push(
       evidence.design === "rcbd"
         ? "If a transformation does not help, the Friedman rank test (reported) does not assume normality."
-        : "If a transformation does not help, use a rank-based test such as Kruskal-Wallis.",
+        : evidence.design === "crd"
+          ? "If a transformation does not help, the Kruskal-Wallis rank test (reported) does not assume normality."
+          : "If a transformation does not help, use a rank-based test such as Kruskal-Wallis.",
     );
   }
   if (!nonNormal && !unequalVariances) advice.push("Residuals look normal and variances similar: the ANOVA assumptions are reasonable.");
