@@ -31,8 +31,18 @@ import type { ModelFit } from "./model-types";
  * 75:153-155.
  *
  * @example
- * fitCombinedSites(yields, treatment, block, site).anova.map((row) => row.source)
- * // ["site", "block(site)", "treatment", "site:treatment", "residual"]
+ * // 2 sites × 2 blocks × 2 treatments; block "1" at S1 and at S2 are different blocks
+ * fitCombinedSites(
+ *   new Float64Array([10, 12, 11, 14, 7, 8, 9, 11]),
+ *   encodeFactor(["a", "b", "a", "b", "a", "b", "a", "b"]),
+ *   encodeFactor(["1", "1", "2", "2", "1", "1", "2", "2"]),
+ *   encodeFactor(["S1", "S1", "S1", "S1", "S2", "S2", "S2", "S2"]),
+ * ).anova.map((row) => [row.source, row.ss, row.f])
+ * // [["site", 18, 4.235294117647059], ["block(site)", 8.5, 17], ["treatment", 8, 16],
+ * //  ["site:treatment", 0.5, 2], ["residual", 0.5, undefined]]
+ * // R anova(lm(terms(y ~ site + site:block + trt + site:trt, keep.order = TRUE))) has the same SS
+ * // (18, 8.5, 8, 0.5, 0.5); its F for site (72) and treatment (32) divide by the residual mean
+ * // square, ours by block(site) (18 / 4.25) and site:treatment (8 / 0.5) as sites are random.
  */
 export function fitCombinedSites(
   response: Float64Array,

@@ -22,9 +22,15 @@ import type { ModelFit } from "./model-types";
  * 2nd ed., ch. 4; Gomez & Gomez (1984) §2.3.
  *
  * @example
- * // 4 × 4 square with treatment effects only: SS_row = SS_column = 0
- * fitLatinSquare(response, treatment, row, column).anova.map((line) => line.source)
- * // ["row", "column", "treatment", "residual"]
+ * // 3 × 3 square, rows R1-R3 read left to right (columns C1-C3): A B C / B C A / C A B
+ * fitLatinSquare(
+ *   new Float64Array([10, 12, 15, 11, 16, 9, 14, 8, 13]),
+ *   encodeFactor(["A", "B", "C", "B", "C", "A", "C", "A", "B"]),
+ *   encodeFactor(["R1", "R1", "R1", "R2", "R2", "R2", "R3", "R3", "R3"]),
+ *   encodeFactor(["C1", "C2", "C3", "C1", "C2", "C3", "C1", "C2", "C3"]),
+ * ).anova.map((line) => line.ss) // row, column, treatment, residual
+ * // [0.6666666666666691, 0.6666666666666691, 54, 4.666666666666664]
+ * // (exact: 2/3, 2/3, 54, 14/3; R anova(lm(y ~ row + column + treatment)): 0.666666666666669, 0.666666666666667, 54, 4.66666666666666)
  */
 export function fitLatinSquare(
   response: Float64Array,

@@ -35,7 +35,8 @@ export interface LeastSquaresMeans {
  * const blocks = encodeFactor(["B1", "B1", "B2"]); const treatment = encodeFactor(["a", "b", "a"]);
  * const fit = fitLinearModel(new Float64Array([1, 3, 2]), [{ source: "block", factors: [blocks] }, { source: "treatment", factors: [treatment] }]);
  * leastSquaresMeans(fit, treatment, [0, 1].map((b) => ({ levels: new Map([[blocks, b]]), weight: 0.5 })))
- * // { lsmeans: [1.4999999999999996, 3.5], covariance: [0.5, 1.1102230246251565e-16, 1.1102230246251565e-16, 1.5000000000000009] }
+ * // { lsmeans: Float64Array [1.4999999999999996, 3.5],
+ * //   covariance: Float64Array [0.5, 1.1102230246251565e-16, 1.1102230246251565e-16, 1.5000000000000009] }
  */
 export function leastSquaresMeans(
   fit: LinearModelFit,
