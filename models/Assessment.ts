@@ -1,17 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
-export const assessmentVariables = [
-  "weed-density",
-  "weed-biomass",
-  "crop-yield",
-  "crop-injury",
-  "weed-control-rating",
-  "labour-time",
-  "custom",
-] as const;
-export type AssessmentVariable = (typeof assessmentVariables)[number];
-export const timingReferences = ["planting", "treatment"] as const;
-export type TimingReference = (typeof timingReferences)[number];
+import type { AssessmentVariable, TimingReference } from "@/lib/trials/vocabulary";
+
+export { assessmentVariables, timingReferences, type AssessmentVariable, type TimingReference } from "@/lib/trials/vocabulary";
 
 export class Assessment extends Model<InferAttributes<Assessment>, InferCreationAttributes<Assessment>> {
   declare id: CreationOptional<string>;

@@ -1,7 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
-export const membershipRoles = ["technician", "reviewer"] as const;
-export type MembershipRole = (typeof membershipRoles)[number];
+import type { MembershipRole } from "@/lib/trials/vocabulary";
+
+export { membershipRoles, type MembershipRole } from "@/lib/trials/vocabulary";
 
 /** A technician or reviewer attached to one trial; the trial's owner needs no membership. */
 export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {

@@ -1,9 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
-export const methodCategories = ["check", "hand", "mulch", "cultivation", "thermal", "robotic", "chemical", "other"] as const;
-export type MethodCategory = (typeof methodCategories)[number];
-export const checkTypes = ["weedy", "weed-free"] as const;
-export type CheckType = (typeof checkTypes)[number];
+import type { CheckType, MethodCategory } from "@/lib/trials/vocabulary";
+
+export { checkTypes, methodCategories, type CheckType, type MethodCategory } from "@/lib/trials/vocabulary";
 
 export class Treatment extends Model<InferAttributes<Treatment>, InferCreationAttributes<Treatment>> {
   declare id: CreationOptional<string>;

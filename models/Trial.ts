@@ -1,9 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
-export const trialDesigns = ["rcbd", "crd", "latin"] as const;
-export type TrialDesign = (typeof trialDesigns)[number];
-export const trialStatuses = ["draft", "active", "locked", "published"] as const;
-export type TrialStatus = (typeof trialStatuses)[number];
+import type { TrialDesign, TrialStatus } from "@/lib/trials/vocabulary";
+
+export { trialDesigns, trialStatuses, type TrialDesign, type TrialStatus } from "@/lib/trials/vocabulary";
 
 export class Trial extends Model<InferAttributes<Trial>, InferCreationAttributes<Trial>> {
   declare id: CreationOptional<string>;

@@ -26,7 +26,7 @@ export function RandomizeButton({ trialId, hasLayout }: { trialId: string; hasLa
 
   return (
     <div className="no-print flex flex-wrap items-center gap-3">
-      <Button type="button" variant="secondary" onClick={randomize} disabled={busy}>
+      <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={randomize} disabled={busy}>
         {busy ? "Randomizing…" : hasLayout ? "Re-randomize with a new seed" : "Randomize the layout"}
       </Button>
       {message && (

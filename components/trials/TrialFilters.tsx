@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { statusNames } from "@/lib/trials/labels";
-import { trialStatuses, type TrialStatus } from "@/models/Trial";
+import { trialStatuses, type TrialStatus } from "@/lib/trials/vocabulary";
 
 const control = "w-full rounded border border-soil-200 bg-white px-3 py-2 text-base";
 

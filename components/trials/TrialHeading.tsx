@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { TrialStatus } from "@/models/Trial";
+import type { TrialStatus } from "@/lib/trials/vocabulary";
 import { StatusBadge } from "./StatusBadge";
 
 export function TrialHeading({ title, status, lines, back = { href: "/trials", label: "Trials" } }: { title: string; status: TrialStatus; lines: string[]; back?: { href: string; label: string } }) {

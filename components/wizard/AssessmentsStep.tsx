@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/Button";
 import { callApi } from "@/lib/client/api";
 import { defaultUnits, variableNames } from "@/lib/trials/labels";
 import { trialAssessmentsSchema, type AssessmentInput, type TrialAssessmentsInput } from "@/lib/validations/trial";
-import { assessmentVariables, type AssessmentVariable } from "@/models/Assessment";
+import { assessmentVariables, type AssessmentVariable } from "@/lib/trials/vocabulary";
 import { FormMessage, SelectField, TextAreaField, TextField } from "./fields";
 import { errorAt, showServerErrors } from "./server-errors";
 
@@ -86,13 +86,13 @@ export function AssessmentsStep({
               <li key={field.id} className="rounded border border-soil-200 bg-white p-4" data-testid="assessment-row">
                 <div className="mb-3 flex flex-wrap items-center gap-2">
                   <h3 className="mr-auto font-semibold">Assessment {index + 1}</h3>
-                  <Button type="button" variant="secondary" onClick={() => move(index, index - 1)} disabled={index === 0} aria-label={`Move assessment ${index + 1} up`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => move(index, index - 1)} disabled={index === 0} aria-label={`Move assessment ${index + 1} up`}>
                     ↑ Up
                   </Button>
-                  <Button type="button" variant="secondary" onClick={() => move(index, index + 1)} disabled={index === fields.length - 1} aria-label={`Move assessment ${index + 1} down`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => move(index, index + 1)} disabled={index === fields.length - 1} aria-label={`Move assessment ${index + 1} down`}>
                     ↓ Down
                   </Button>
-                  <Button type="button" variant="secondary" onClick={() => remove(index)} disabled={isPinned} aria-label={`Remove assessment ${index + 1}`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => remove(index)} disabled={isPinned} aria-label={`Remove assessment ${index + 1}`}>
                     Remove
                   </Button>
                 </div>
@@ -134,7 +134,7 @@ export function AssessmentsStep({
             options={assessmentVariables.map((variable) => ({ value: variable, label: variableNames[variable] }))}
             className="max-w-xs"
           />
-          <Button type="button" variant="secondary" onClick={() => append(preset(nextVariable, 4))}>
+          <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => append(preset(nextVariable, 4))}>
             + Add
           </Button>
         </div>

@@ -115,7 +115,7 @@ function NewSiteForm({ onCreated }: { onCreated: (site: SiteOption) => void }) {
         <TextField label="Region" {...register("region")} error={errorAt(errors, "region")} />
         <TextField label="Soil" {...register("soil")} error={errorAt(errors, "soil")} placeholder="Loam, 2% organic matter" />
         <TextAreaField label="Site notes" {...register("notes")} error={errorAt(errors, "notes")} rows={2} />
-        <Button type="submit" variant="secondary" disabled={formState.isSubmitting} className="w-full">
+        <Button type="submit" variant="secondary" disabled={formState.isSubmitting} className="disabled:cursor-not-allowed disabled:opacity-50 w-full">
           {formState.isSubmitting ? "Adding…" : "Add site"}
         </Button>
       </form>

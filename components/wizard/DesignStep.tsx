@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/Button";
 import { callApi } from "@/lib/client/api";
 import { blockWord, designNames } from "@/lib/trials/labels";
 import { trialDesignSchema, type TrialDesignInput, type TrialDesignValues } from "@/lib/validations/trial";
-import { trialDesigns, type TrialDesign } from "@/models/Trial";
+import { trialDesigns, type TrialDesign } from "@/lib/trials/vocabulary";
 import { FormMessage, SelectField, TextField } from "./fields";
 import { ReplicationPlanner } from "./ReplicationPlanner";
 import { errorAt, showServerErrors } from "./server-errors";
@@ -113,7 +113,7 @@ export function DesignStep({
             {formState.isSubmitting ? "Saving…" : "Save, lay out plots and continue"}
           </Button>
           {canRandomize && plotCount > 0 && (
-            <Button type="button" variant="secondary" onClick={rerandomize} disabled={busy}>
+            <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={rerandomize} disabled={busy}>
               {busy ? "Randomizing…" : "Re-randomize with a new seed"}
             </Button>
           )}

@@ -4,7 +4,7 @@ import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { blocksNeeded, residualDfCheck } from "@/lib/stats";
 import { blockWord, residualDf } from "@/lib/trials/labels";
-import type { TrialDesign } from "@/models/Trial";
+import type { TrialDesign } from "@/lib/trials/vocabulary";
 
 function parse(value: string): number {
   return value.trim() === "" ? Number.NaN : Number(value);
@@ -105,7 +105,7 @@ export function ReplicationPlanner({
             </p>
             {!result.plan.residualDf.adequate && <p className="rounded bg-amber-50 px-2 py-1 text-amber-900">{result.plan.residualDf.message}</p>}
             {design !== "latin" && (
-              <Button type="button" variant="secondary" disabled={disabled || result.plan.blocks === blocks} onClick={() => onUse(result.plan.blocks)}>
+              <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" disabled={disabled || result.plan.blocks === blocks} onClick={() => onUse(result.plan.blocks)}>
                 Use {result.plan.blocks} {blockWord(design)}
               </Button>
             )}

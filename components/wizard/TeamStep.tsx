@@ -78,7 +78,7 @@ export function TeamStep({ trialId, initial, candidates, readOnlyReason }: { tri
                       </p>
                     )}
                   </div>
-                  <Button type="button" variant="secondary" onClick={() => remove(index)} aria-label={`Remove ${person?.name ?? "member"}`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => remove(index)} aria-label={`Remove ${person?.name ?? "member"}`}>
                     Remove
                   </Button>
                 </li>
@@ -98,7 +98,7 @@ export function TeamStep({ trialId, initial, candidates, readOnlyReason }: { tri
               ))}
             </select>
           </label>
-          <Button type="button" variant="secondary" onClick={add} disabled={!pick}>
+          <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={add} disabled={!pick}>
             + Add to team
           </Button>
         </div>

@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/Button";
 import { callApi } from "@/lib/client/api";
 import { categoryNames } from "@/lib/trials/labels";
 import { trialTreatmentsSchema, type TreatmentInput, type TrialTreatmentsInput } from "@/lib/validations/trial";
-import { checkTypes, methodCategories } from "@/models/Treatment";
+import { checkTypes, methodCategories } from "@/lib/trials/vocabulary";
 import { FormMessage, SelectField, TextAreaField, TextField } from "./fields";
 import { errorAt, showServerErrors } from "./server-errors";
 
@@ -132,13 +132,13 @@ export function TreatmentsStep({
               <li key={field.id} className="rounded border border-soil-200 bg-white p-4" data-testid="treatment-row">
                 <div className="mb-3 flex flex-wrap items-center gap-2">
                   <h3 className="mr-auto font-semibold">Treatment {index + 1}</h3>
-                  <Button type="button" variant="secondary" onClick={() => move(index, index - 1)} disabled={index === 0} aria-label={`Move treatment ${index + 1} up`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => move(index, index - 1)} disabled={index === 0} aria-label={`Move treatment ${index + 1} up`}>
                     ↑ Up
                   </Button>
-                  <Button type="button" variant="secondary" onClick={() => move(index, index + 1)} disabled={index === fields.length - 1} aria-label={`Move treatment ${index + 1} down`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => move(index, index + 1)} disabled={index === fields.length - 1} aria-label={`Move treatment ${index + 1} down`}>
                     ↓ Down
                   </Button>
-                  <Button type="button" variant="secondary" onClick={() => remove(index)} disabled={fields.length === 1} aria-label={`Remove treatment ${index + 1}`}>
+                  <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => remove(index)} disabled={fields.length === 1} aria-label={`Remove treatment ${index + 1}`}>
                     Remove
                   </Button>
                 </div>
@@ -166,7 +166,7 @@ export function TreatmentsStep({
           })}
         </ol>
         <div className="flex flex-wrap items-end gap-3">
-          <Button type="button" variant="secondary" onClick={() => append(blank(fields.length + 1))}>
+          <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={() => append(blank(fields.length + 1))}>
             + Add a treatment
           </Button>
           {copySources.length > 0 && (
@@ -179,7 +179,7 @@ export function TreatmentsStep({
                 options={copySources.map((source) => ({ value: source.id, label: `${source.title} (${source.season}, ${source.treatments})` }))}
                 className="max-w-md"
               />
-              <Button type="button" variant="secondary" onClick={copy}>
+              <Button type="button" variant="secondary" className="disabled:cursor-not-allowed disabled:opacity-50" onClick={copy}>
                 Copy
               </Button>
             </div>

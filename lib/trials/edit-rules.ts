@@ -1,4 +1,4 @@
-import type { TrialStatus } from "@/models/Trial";
+import type { TrialStatus } from "./vocabulary";
 
 /**
  * What may change in a trial, and why not. Pure, so pages can grey out what the API would

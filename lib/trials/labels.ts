@@ -1,6 +1,4 @@
-import type { AssessmentVariable } from "@/models/Assessment";
-import type { MethodCategory } from "@/models/Treatment";
-import type { TrialDesign, TrialStatus } from "@/models/Trial";
+import type { AssessmentVariable, MethodCategory, TrialDesign, TrialStatus } from "./vocabulary";
 
 /** Plain trade words for stored codes; safe to use in client components. */
 

@@ -1,4 +1,4 @@
-import type { TimingReference } from "@/models/Assessment";
+import type { TimingReference } from "./vocabulary";
 
 export interface ScheduledAssessment {
   id: string;

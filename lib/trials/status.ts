@@ -1,4 +1,4 @@
-import type { TrialStatus } from "@/models/Trial";
+import type { TrialStatus } from "./vocabulary";
 
 /** What a plan needs before it goes to the field. */
 export interface PlanFacts {

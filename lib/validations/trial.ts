@@ -1,8 +1,13 @@
 import { z } from "zod";
-import { assessmentVariables, timingReferences } from "@/models/Assessment";
-import { membershipRoles } from "@/models/Membership";
-import { checkTypes, methodCategories } from "@/models/Treatment";
-import { trialDesigns, trialStatuses } from "@/models/Trial";
+import {
+  assessmentVariables,
+  checkTypes,
+  membershipRoles,
+  methodCategories,
+  timingReferences,
+  trialDesigns,
+  trialStatuses,
+} from "@/lib/trials/vocabulary";
 
 /*
  * The trial wizard's schemas. Each step's form resolves with the same schema its API route
