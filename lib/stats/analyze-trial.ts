@@ -34,6 +34,7 @@ export interface TreatmentMean {
   lsmean: number;
   se: number;
   backTransformed?: number;
+  /** Compact letters (Tukey at alpha); past 52 letters names carry primes (a', b''), so split with match(/[a-zA-Z]'{0,}/g). */
   group: string;
 }
 

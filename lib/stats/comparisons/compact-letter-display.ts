@@ -6,9 +6,19 @@
  * column holding every treatment; for each significant pair (i, j), every
  * column holding both is split into a copy without i and a copy without j;
  * after each split, columns contained in another column are absorbed
- * (deleted). Columns are then ordered by their highest-mean member, so the
- * treatment with the highest mean gets "a"; letters run a-z, then A-Z, then
- * numbered.
+ * (deleted). Absorption alone can leave a column whose every pair (and
+ * every member) is also covered by other columns; such redundant columns
+ * are then removed one at a time (the widest first), so that dropping any
+ * remaining letter would break the display. Columns are then ordered by
+ * their highest-mean member, so the treatment with the highest mean gets
+ * "a".
+ *
+ * Letter names: a-z, then A-Z (52 columns), then the same letters with one
+ * prime (a' … Z'), then two (a'' … Z''), and so on. A treatment's letters
+ * are joined without separators ("ab'c"); every letter starts with a Latin
+ * letter and its primes follow it, so the string splits back without
+ * ambiguity with group.match(/[a-zA-Z]'{0,}/g); with numbered suffixes
+ * ("a1") a letter name could be read as a letter and a footnote digit.
  *
  * Why this algorithm: simple "sort and sweep" letterings are wrong when the
  * significance pattern is not a set of intervals, which happens with
@@ -61,6 +71,7 @@ export function compactLetterDisplay(means: ArrayLike<number>, isSignificant: (f
       columns = kept;
     }
   }
+  columns = withoutRedundantColumns(columns, count);
   const has = (column: Uint32Array, treatment: number) => (column[treatment >>> 5] & (1 << (treatment & 31))) !== 0;
   const orderByMean = Array.from({ length: count }, (_, index) => index).sort((a, b) => means[b] - means[a] || a - b);
   const rank = new Int32Array(count);
@@ -94,8 +105,49 @@ function isSubset(inner: Uint32Array, outer: Uint32Array): boolean {
   return true;
 }
 
+/**
+ * Drops columns whose pairs and members all appear in other columns too: they add no
+ * information, and a display with them is not minimal. The widest redundant column goes first
+ * (it removes the most letters from the table); counts are updated after each removal, since
+ * dropping one column can make another one necessary.
+ */
+function withoutRedundantColumns(columns: Uint32Array[], count: number): Uint32Array[] {
+  const members = columns.map((column) => {
+    const list: number[] = [];
+    for (let treatment = 0; treatment < count; treatment++) if (column[treatment >>> 5] & (1 << (treatment & 31))) list.push(treatment);
+    return list;
+  });
+  const pairCover = new Int32Array(count * count);
+  const memberCover = new Int32Array(count);
+  const cover = (list: number[], change: number) => {
+    for (let first = 0; first < list.length; first++) {
+      memberCover[list[first]] += change;
+      for (let second = first + 1; second < list.length; second++) pairCover[list[first] * count + list[second]] += change;
+    }
+  };
+  for (const list of members) cover(list, 1);
+  const alive = columns.map(() => true);
+  const redundant = (list: number[]) => {
+    for (let first = 0; first < list.length; first++) {
+      if (memberCover[list[first]] < 2) return false;
+      for (let second = first + 1; second < list.length; second++) if (pairCover[list[first] * count + list[second]] < 2) return false;
+    }
+    return true;
+  };
+  for (;;) {
+    let widest = -1;
+    for (let index = 0; index < columns.length; index++) {
+      if (alive[index] && (widest < 0 || members[index].length > members[widest].length) && redundant(members[index])) widest = index;
+    }
+    if (widest < 0) break;
+    alive[widest] = false;
+    cover(members[widest], -1);
+  }
+  return columns.filter((_, index) => alive[index]);
+}
+
+/** a-z, A-Z, then the same with one prime, two primes, …: joined letters split back with /[a-zA-Z]'{0,}/g. */
 function letterName(index: number): string {
   const alphabet = "abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ";
-  if (index < alphabet.length) return alphabet[index];
-  return `${alphabet[index % alphabet.length]}${Math.floor(index / alphabet.length)}`;
+  return alphabet[index % alphabet.length] + "'".repeat(Math.floor(index / alphabet.length));
 }
