@@ -1,24 +1,31 @@
-import type { InputHTMLAttributes, ReactNode, SelectHTMLAttributes, TextareaHTMLAttributes } from "react";
+import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from "react";
 
 /*
  * Labelled form controls for the wizard, each with its validation message right beneath it.
  * They take react-hook-form's register() output as props (React 19 passes ref as a prop).
+ * Labels point at their control by id rather than wrapping it, so a select's name is its
+ * label alone and not the label plus the chosen option.
  */
 
 const control =
   "w-full rounded border border-soil-200 bg-white px-3 py-2 text-base focus:border-leaf-600 focus:outline-none focus:ring-2 focus:ring-leaf-100 aria-[invalid=true]:border-red-600 disabled:bg-soil-100";
 
-function errorId(name: string) {
-  return `${name.replace(/\./g, "-")}-error`;
-}
-
-function Message({ name, error }: { name: string; error?: string }) {
+function Message({ id, error }: { id: string; error?: string }) {
   if (!error) return null;
   return (
-    <span id={errorId(name)} role="alert" className="mt-1 block text-sm text-red-700">
+    <span id={id} role="alert" className="mt-1 block text-sm text-red-700">
       {error}
     </span>
   );
+}
+
+function useIds() {
+  const base = useId();
+  return { control: `${base}control`, error: `${base}error`, hint: `${base}hint` };
+}
+
+function describedBy(ids: ReturnType<typeof useIds>, error?: string, hint?: ReactNode) {
+  return [error ? ids.error : null, hint ? ids.hint : null].filter(Boolean).join(" ") || undefined;
 }
 
 interface Common {
@@ -30,24 +37,30 @@ interface Common {
 }
 
 export function TextField({ label, name, error, hint, className = "", ...input }: Common & InputHTMLAttributes<HTMLInputElement>) {
+  const ids = useIds();
   return (
-    <label className={`block text-sm ${className}`}>
-      <span className="mb-1 block font-medium text-soil-900">{label}</span>
-      <input name={name} aria-invalid={error ? true : undefined} aria-describedby={error ? errorId(name) : undefined} className={control} {...input} />
-      {hint && <span className="mt-1 block text-xs text-soil-700">{hint}</span>}
-      <Message name={name} error={error} />
-    </label>
+    <div className={`text-sm ${className}`}>
+      <label htmlFor={ids.control} className="mb-1 block font-medium text-soil-900">
+        {label}
+      </label>
+      <input id={ids.control} name={name} aria-invalid={error ? true : undefined} aria-describedby={describedBy(ids, error, hint)} className={control} {...input} />
+      {hint && <span id={ids.hint} className="mt-1 block text-xs text-soil-700">{hint}</span>}
+      <Message id={ids.error} error={error} />
+    </div>
   );
 }
 
 export function TextAreaField({ label, name, error, hint, className = "", ...input }: Common & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+  const ids = useIds();
   return (
-    <label className={`block text-sm ${className}`}>
-      <span className="mb-1 block font-medium text-soil-900">{label}</span>
-      <textarea name={name} rows={3} aria-invalid={error ? true : undefined} aria-describedby={error ? errorId(name) : undefined} className={control} {...input} />
-      {hint && <span className="mt-1 block text-xs text-soil-700">{hint}</span>}
-      <Message name={name} error={error} />
-    </label>
+    <div className={`text-sm ${className}`}>
+      <label htmlFor={ids.control} className="mb-1 block font-medium text-soil-900">
+        {label}
+      </label>
+      <textarea id={ids.control} name={name} rows={3} aria-invalid={error ? true : undefined} aria-describedby={describedBy(ids, error, hint)} className={control} {...input} />
+      {hint && <span id={ids.hint} className="mt-1 block text-xs text-soil-700">{hint}</span>}
+      <Message id={ids.error} error={error} />
+    </div>
   );
 }
 
@@ -60,19 +73,22 @@ export function SelectField({
   options,
   ...select
 }: Common & SelectHTMLAttributes<HTMLSelectElement> & { options: { value: string; label: string }[] }) {
+  const ids = useIds();
   return (
-    <label className={`block text-sm ${className}`}>
-      <span className="mb-1 block font-medium text-soil-900">{label}</span>
-      <select name={name} aria-invalid={error ? true : undefined} aria-describedby={error ? errorId(name) : undefined} className={control} {...select}>
+    <div className={`text-sm ${className}`}>
+      <label htmlFor={ids.control} className="mb-1 block font-medium text-soil-900">
+        {label}
+      </label>
+      <select id={ids.control} name={name} aria-invalid={error ? true : undefined} aria-describedby={describedBy(ids, error, hint)} className={control} {...select}>
         {options.map((option) => (
           <option key={option.value} value={option.value}>
             {option.label}
           </option>
         ))}
       </select>
-      {hint && <span className="mt-1 block text-xs text-soil-700">{hint}</span>}
-      <Message name={name} error={error} />
-    </label>
+      {hint && <span id={ids.hint} className="mt-1 block text-xs text-soil-700">{hint}</span>}
+      <Message id={ids.error} error={error} />
+    </div>
   );
 }
 
