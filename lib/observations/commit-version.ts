@@ -118,6 +118,16 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     const rowsReplaced = typeof replaced === "number" ? replaced : (replaced?.rowCount ?? 0);
 
     await insertValues(sequelize, request, version.id, plotIds, transaction);
+    if (request.uploadId) {
+      // Inside the same transaction, so a file can never become two versions.
+      const [, marked] = (await sequelize.query(
+        "UPDATE uploads SET status = 'committed', version_id = :versionId, updated_at = now() WHERE id = :uploadId AND status = 'checked'",
+        { replacements: { versionId: version.id, uploadId: request.uploadId }, transaction },
+      )) as [unknown, { rowCount?: number } | number];
+      if ((typeof marked === "number" ? marked : marked?.rowCount) !== 1) {
+        throw new AppError("CONFLICT", "This file has already been committed, or was not checked.");
+      }
+    }
     await version.update({ rowsReplaced }, { transaction });
 
     const where = request.replacePlotNumbers ? `plot${request.replacePlotNumbers.length === 1 ? "" : "s"} ${request.replacePlotNumbers.join(", ")}` : "the whole assessment";

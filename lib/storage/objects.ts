@@ -1,0 +1,68 @@
+import "server-only";
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand } from "@aws-sdk/client-s3";
+import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
+import { AppError } from "@/lib/errors";
+import { bucket, s3 } from "./s3";
+
+const PRESIGN_SECONDS = 15 * 60;
+
+function unavailable(): AppError {
+  return new AppError("UNAVAILABLE", "File storage is not answering. Nothing was recorded; try again in a minute.");
+}
+
+/**
+ * A browser PUT straight to storage; the signature binds type and length, so the object
+ * cannot be swapped for another kind or size than the one declared.
+ */
+export async function presignUpload(key: string, contentType: string, sizeBytes: number): Promise<string> {
+  try {
+    return await getSignedUrl(s3(), new PutObjectCommand({ Bucket: bucket(), Key: key, ContentType: contentType, ContentLength: sizeBytes }), {
+      expiresIn: PRESIGN_SECONDS,
+      signableHeaders: new Set(["content-type", "content-length"]),
+    });
+  } catch {
+    throw unavailable();
+  }
+}
+
+export async function objectSize(key: string): Promise<number | null> {
+  try {
+    const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
+    return head.ContentLength ?? null;
+  } catch (error) {
+    const status = (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+    if (status === 404 || (error as Error).name === "NotFound") return null;
+    throw unavailable();
+  }
+}
+
+export async function readObject(key: string): Promise<AsyncIterable<Uint8Array>> {
+  try {
+    const response = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+    return response.Body as AsyncIterable<Uint8Array>;
+  } catch {
+    throw unavailable();
+  }
+}
+
+export async function readObjectBytes(key: string): Promise<Buffer> {
+  const parts: Uint8Array[] = [];
+  for await (const part of await readObject(key)) parts.push(part);
+  return Buffer.concat(parts);
+}
+
+export async function writeObject(key: string, body: Buffer | string, contentType: string): Promise<void> {
+  try {
+    await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: body, ContentType: contentType }));
+  } catch {
+    throw unavailable();
+  }
+}
+
+export async function deleteObject(key: string): Promise<void> {
+  try {
+    await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
+  } catch {
+    throw unavailable();
+  }
+}

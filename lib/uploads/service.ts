@@ -1,0 +1,151 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { db } from "@/lib/db/sequelize";
+import { AppError, notFound } from "@/lib/errors";
+import { readCsv } from "@/lib/ingest/read-csv";
+import type { IngestProblem, IngestRecord } from "@/lib/ingest/types";
+import { commitVersion, type CommittedVersion } from "@/lib/observations/commit-version";
+import { currentRawValues } from "@/lib/data/observations";
+import { objectSize, presignUpload, readObject } from "@/lib/storage/objects";
+import type { SessionUser } from "@/lib/auth/session";
+import type { StartUploadInput } from "@/lib/validations/uploads";
+import { Upload, type Trial } from "@/models";
+import { ingestContextFor } from "./context";
+
+export interface StartedUpload {
+  uploadId: string;
+  putUrl: string;
+  contentType: string;
+}
+
+export interface ChangeSummary {
+  added: number;
+  changed: number;
+  unchanged: number;
+  removed: number;
+}
+
+export interface CheckedUpload {
+  uploadId: string;
+  status: "checked" | "refused";
+  format: "long" | "wide" | null;
+  rowCount: number;
+  sha256: string;
+  problems: IngestProblem[];
+  errors: number;
+  warnings: number;
+  preview: IngestRecord[];
+  changes: ChangeSummary;
+}
+
+const CONTENT_TYPE = "text/csv";
+const PREVIEW_ROWS = 200;
+
+export async function uploadTrialId(uploadId: string): Promise<string> {
+  db();
+  const upload = await Upload.findByPk(uploadId, { attributes: ["trialId"] });
+  if (!upload) throw notFound("upload");
+  return upload.trialId;
+}
+
+/** Registers the file and hands back a presigned PUT; the object key never uses the file's own name. */
+export async function startUpload(user: SessionUser, trial: Trial, input: StartUploadInput): Promise<StartedUpload> {
+  assertRecordable(trial);
+  await ingestContextFor(input.trialId, input.assessmentId);
+  const id = randomUUID();
+  const objectKey = `trials/${input.trialId}/assessments/${input.assessmentId}/uploads/${id}.csv`;
+  const putUrl = await presignUpload(objectKey, CONTENT_TYPE, input.sizeBytes);
+  await Upload.create({
+    id,
+    trialId: input.trialId,
+    assessmentId: input.assessmentId,
+    objectKey,
+    originalName: input.fileName.replace(/[^\w .()-]/g, "_"),
+    declaredSizeBytes: input.sizeBytes,
+    sizeBytes: null,
+    sha256: null,
+    rowCount: null,
+    uploadedById: user.id,
+    versionId: null,
+  });
+  return { uploadId: id, putUrl, contentType: CONTENT_TYPE };
+}
+
+/** Data are recorded on active trials, and with a reason on locked ones; never on drafts or published trials. */
+export function assertRecordable(trial: Trial): void {
+  if (trial.status === "draft") throw new AppError("CONFLICT", "Activate the trial before recording data: its plan may still change.");
+  if (trial.status === "published") throw new AppError("CONFLICT", "This trial is published; its data can no longer change.");
+}
+
+async function loadUpload(uploadId: string): Promise<Upload> {
+  const upload = await Upload.findByPk(uploadId);
+  if (!upload) throw notFound("upload");
+  if (upload.status === "committed") throw new AppError("CONFLICT", "This file has already been committed as a version.");
+  return upload;
+}
+
+async function readStoredFile(upload: Upload) {
+  const size = await objectSize(upload.objectKey);
+  if (size === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
+  if (size !== Number(upload.declaredSizeBytes)) throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
+  const context = await ingestContextFor(upload.trialId, upload.assessmentId);
+  return readCsv(await readObject(upload.objectKey), context);
+}
+
+function compare(records: IngestRecord[], current: { plotNumber: number; quadrat: number; species: string; value: number }[]): ChangeSummary {
+  const key = (entry: { plotNumber: number; quadrat: number; species: string }) => `${entry.plotNumber}|${entry.quadrat}|${entry.species.toLowerCase()}`;
+  const existing = new Map(current.map((entry) => [key(entry), entry.value]));
+  const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
+  for (const record of records) {
+    const before = existing.get(key(record));
+    if (before === undefined) summary.added += 1;
+    else if (before === record.value) summary.unchanged += 1;
+    else summary.changed += 1;
+    existing.delete(key(record));
+  }
+  summary.removed = existing.size;
+  return summary;
+}
+
+/** Reads the stored file back, checks every row, and keeps the problems with the upload. */
+export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
+  db();
+  const upload = await loadUpload(uploadId);
+  const result = await readStoredFile(upload);
+  const errors = result.problems.filter((problem) => problem.severity === "error").length;
+  const status = errors > 0 ? "refused" : "checked";
+  await upload.update({ status, problems: result.problems, rowCount: result.rowsRead, sizeBytes: result.sizeBytes, sha256: result.sha256 });
+  const current = await currentRawValues(upload.assessmentId);
+  return {
+    uploadId,
+    status,
+    format: result.format,
+    rowCount: result.rowsRead,
+    sha256: result.sha256,
+    problems: result.problems,
+    errors,
+    warnings: result.problems.length - errors,
+    preview: result.records.slice(0, PREVIEW_ROWS),
+    changes: compare(result.records, current),
+  };
+}
+
+/** Commits a checked file as the assessment's next version; the file is read again and must not have changed. */
+export async function commitUpload(user: SessionUser, uploadId: string, reason?: string): Promise<CommittedVersion> {
+  const sequelize = db();
+  const upload = await loadUpload(uploadId);
+  if (upload.status !== "checked") throw new AppError("CONFLICT", "Check the file and fix its errors before committing it.");
+  const result = await readStoredFile(upload);
+  if (result.sha256 !== upload.sha256) throw new AppError("CONFLICT", "The stored file changed after it was checked. Check it again.");
+  if (result.problems.some((problem) => problem.severity === "error")) throw new AppError("CONFLICT", "The file has errors; fix them and upload it again.");
+  const version = await commitVersion(sequelize, {
+    trialId: upload.trialId,
+    assessmentId: upload.assessmentId,
+    userId: user.id,
+    source: "upload",
+    uploadId: upload.id,
+    values: result.records,
+    reason,
+  });
+  return version;
+}
