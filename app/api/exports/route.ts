@@ -1,0 +1,17 @@
+import { z } from "zod";
+import { route } from "@/lib/auth/guard";
+import { plotValuesCsv, rawValuesCsv } from "@/lib/exports/trial-data";
+import { uuidSchema } from "@/lib/validations/common";
+
+export const dynamic = "force-dynamic";
+
+const exportQuery = z
+  .object({ trialId: uuidSchema, assessmentId: uuidSchema.optional(), kind: z.enum(["raw", "plot"], "Choose raw or plot values.") })
+  .strict();
+
+/** Tidy CSV of a trial's data, for one assessment or the whole trial. */
+export const GET = route({ permission: "trial:read", query: exportQuery, trialId: ({ query }) => query.trialId }, async ({ query, trial }) => {
+  const csv = query.kind === "raw" ? await rawValuesCsv(trial!, query.assessmentId) : await plotValuesCsv(trial!, query.assessmentId);
+  const name = `hoebench-${query.kind === "raw" ? "raw-values" : "plot-values"}-${trial!.id.slice(0, 8)}${query.assessmentId ? `-${query.assessmentId.slice(0, 8)}` : ""}.csv`;
+  return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${name}"` } });
+});
