@@ -6,21 +6,46 @@ import { TrialHeading } from "@/components/trials/TrialHeading";
 import { findPlotByNumber } from "@/lib/data/plots";
 import { findTreatment } from "@/lib/data/treatments";
 import { cautionsFor } from "@/lib/safety/cautions";
+import { PhotoPanel } from "@/components/uploads/PhotoPanel";
+import { PlotEntry, type EntryAssessment } from "@/components/uploads/PlotEntry";
+import { can } from "@/lib/auth/permissions";
+import { assessmentsOf } from "@/lib/data/assessments";
+import { currentValuesOfPlot } from "@/lib/data/observations";
+import { photosOfPlot } from "@/lib/photos/service";
 import { blockWord, categoryNames } from "@/lib/trials/labels";
 import { trialForPage } from "@/lib/trials/page-access";
 
 export const metadata: Metadata = { title: "Plot" };
 export const dynamic = "force-dynamic";
 
-/** Where a stake's code leads. Read-only for now; data entry per plot comes with field collection. */
+/** The current assessment: the one planned nearest to today. */
+function nearestToToday(assessments: EntryAssessment[]): string {
+  const today = Date.now();
+  const distance = (entry: EntryAssessment) => (entry.plannedDate ? Math.abs(Date.parse(entry.plannedDate) - today) : Number.POSITIVE_INFINITY);
+  return [...assessments].sort((a, b) => distance(a) - distance(b))[0]?.id ?? "";
+}
+
+/** Where a stake's code leads: the plot, its treatment, and (for those who collect) data entry and photos. */
 export default async function PlotPage({ params }: { params: Promise<{ trialId: string; number: string }> }) {
   const { trialId, number } = await params;
-  const { trial } = await trialForPage(trialId);
+  const { user, trial } = await trialForPage(trialId);
   if (!/^\d{1,6}$/.test(number)) notFound();
   const plot = await findPlotByNumber(trial.id, Number(number));
   if (!plot) notFound();
   const treatment = (await findTreatment(trial.id, plot.treatmentId))!;
   const cautions = cautionsFor(treatment.category);
+  const mayRecord = can(user.role, "observation:write") && (trial.status === "active" || trial.status === "locked");
+  const [assessments, current, photos] = await Promise.all([assessmentsOf(trial.id), currentValuesOfPlot(trial.id, plot.number), photosOfPlot(trial.id, plot.id)]);
+  const entryAssessments: EntryAssessment[] = assessments.map((assessment) => ({
+    id: assessment.id,
+    name: assessment.name,
+    unit: assessment.unit,
+    quadratsPerPlot: assessment.quadratsPerPlot,
+    plannedDate: assessment.plannedDate,
+    current: Object.fromEntries(
+      (current.find((entry) => entry.assessmentId === assessment.id)?.values ?? []).filter((entry) => entry.species === "").map((entry) => [entry.quadrat, entry.value]),
+    ),
+  }));
   const word = blockWord(trial.design, 1);
   return (
     <section className="max-w-xl">
@@ -48,6 +73,33 @@ export default async function PlotPage({ params }: { params: Promise<{ trialId: 
         <div className="mt-4">
           <Cautions cautions={cautions} />
         </div>
+      )}
+      {mayRecord && entryAssessments.length > 0 && (
+        <div className="mt-4 space-y-4">
+          <PlotEntry trialId={trial.id} plotNumber={plot.number} assessments={entryAssessments} initialAssessmentId={nearestToToday(entryAssessments)} needsReason={trial.status === "locked"} />
+          <PhotoPanel trialId={trial.id} plotNumber={plot.number} assessmentId={nearestToToday(entryAssessments) || null} />
+        </div>
+      )}
+      {photos.length > 0 && (
+        <section className="mt-4" aria-labelledby="photos-heading">
+          <h2 id="photos-heading" className="mb-2 text-lg font-semibold">
+            Photos
+          </h2>
+          <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" data-testid="plot-photos">
+            {photos.map((photo) => (
+              <li key={photo.id}>
+                <a href={`/api/photos/${photo.id}/original`} target="_blank" rel="noopener">
+                  {/* eslint-disable-next-line @next/next/no-img-element -- served through our own access check */}
+                  <img src={`/api/photos/${photo.id}/thumbnail`} alt={photo.caption || `Plot ${plot.number} photo`} className="aspect-square w-full rounded border border-soil-200 object-cover" />
+                </a>
+                <p className="mt-1 text-xs text-soil-700">
+                  {photo.caption ? `${photo.caption} · ` : ""}
+                  {photo.createdAt.toISOString().slice(0, 10)}
+                </p>
+              </li>
+            ))}
+          </ul>
+        </section>
       )}
       <p className="mt-4 text-sm">
         <Link href={`/trials/${trial.id}/map`} className="text-leaf-700 underline">
