@@ -85,11 +85,13 @@ async function serve(mode: "start" | "dev"): Promise<void> {
 async function test(args: string[]): Promise<void> {
   const filters = args.filter((arg) => !arg.startsWith("--"));
   const runBrowser = filters.length === 0 || args.includes("--e2e");
+  // --server: serve the app for HTTP-level suites without running the browser tests.
+  const withServer = runBrowser || args.includes("--server");
   if (runBrowser) ensureDebianPackages("/usr/bin/chromium", ["chromium"]);
   const env = await bringUp("test");
   process.on("SIGINT", () => shutdown(130));
   await startFakes("test", env);
-  if (runBrowser) {
+  if (withServer) {
     buildApp(env);
     await serveApp("test", env);
   }

@@ -3,6 +3,17 @@ import { Assessment, Plot, Site, Treatment, Trial, User } from "@/models";
 import type { TrialStatus } from "@/models/Trial";
 import { testDatabase } from "../support/database";
 
+const created: { trialId: string; siteId: string }[] = [];
+
+/** Removes every trial (and its site) the factory made, so other suites see only the demo. */
+export async function removeTrialFixtures(): Promise<void> {
+  const sequelize = testDatabase();
+  for (const { trialId, siteId } of created.splice(0)) {
+    await sequelize.query("DELETE FROM trials WHERE id = :trialId", { replacements: { trialId } });
+    await sequelize.query("DELETE FROM sites WHERE id = :siteId", { replacements: { siteId } });
+  }
+}
+
 export interface TrialFixture {
   trial: Trial;
   treatments: Treatment[];
@@ -43,6 +54,7 @@ export async function createTrialFixture(options: {
     status: options.status ?? "active",
     ownerId: owner.id,
   });
+  created.push({ trialId: trial.id, siteId: site.id });
   const treatmentCount = options.treatments ?? 3;
   const treatments: Treatment[] = [];
   for (let index = 0; index < treatmentCount; index += 1) {

@@ -4,7 +4,7 @@ import { commitVersion, type NewValue } from "@/lib/observations/commit-version"
 import { AppError } from "@/lib/errors";
 import { AuditEvent, DatasetVersion, Observation } from "@/models";
 import { createSequelize } from "@/lib/db/sequelize";
-import { createTrialFixture, type TrialFixture } from "../factories/trials";
+import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
 import { testEnvironment } from "../support/environment";
 
@@ -118,5 +118,6 @@ describe("committing a version of an assessment's data", () => {
 });
 
 afterAll(async () => {
+  await removeTrialFixtures();
   await testDatabase().close();
 });
