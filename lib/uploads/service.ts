@@ -10,6 +10,7 @@ import { objectSize, presignUpload, readObject } from "@/lib/storage/objects";
 import type { SessionUser } from "@/lib/auth/session";
 import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
+import { notify } from "@/lib/notifications/notify";
 import { ingestContextFor } from "./context";
 
 export interface StartedUpload {
@@ -147,5 +148,6 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
     values: result.records,
     reason,
   });
+  await notify({ type: "upload-committed", trialId: upload.trialId, assessmentId: upload.assessmentId, versionNumber: version.number, actorId: user.id });
   return version;
 }
