@@ -1,0 +1,60 @@
+/**
+ * The pieces of a running Hoebench on loopback, shared by the start and test commands and
+ * the benchmarks: PostgreSQL with a migrated, seeded database, the S3 and mail fakes, the app.
+ */
+import { mkdirSync, rmSync } from "node:fs";
+import path from "node:path";
+import { spawnSync } from "node:child_process";
+import { ensureCluster, ensureDatabase, recreateDatabase } from "./postgres";
+import { prepareDatabase } from "./database";
+import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName, type Mode } from "./environment";
+import { say } from "./log";
+import { httpOk, onShutdown, portOpen, startChild, waitFor } from "./processes";
+
+export const nextBin = path.join(projectRoot, "node_modules/next/dist/bin/next");
+const tsxBin = path.join(projectRoot, "node_modules/.bin/tsx");
+
+export async function startFakes(mode: Mode, env: Record<string, string>): Promise<void> {
+  const ports = portsFor(mode);
+  if (await portOpen(ports.smtp)) {
+    say(`local S3 and mail fakes already running on ${ports.s3}/${ports.smtp}`);
+    return;
+  }
+  const fakeState = path.join(stateRoot, mode === "test" ? testStateName("fakes-test") : "fakes");
+  if (mode === "test") rmSync(fakeState, { recursive: true, force: true });
+  mkdirSync(fakeState, { recursive: true });
+  startChild("local S3 and mail fakes", tsxBin, [path.join(projectRoot, "scripts/fakes.ts")], {
+    ...env,
+    FAKE_S3_PORT: String(ports.s3),
+    FAKE_SMTP_PORT: String(ports.smtp),
+    FAKE_MAIL_HTTP_PORT: String(ports.mailHttp),
+    FAKE_STATE_DIR: fakeState,
+    FAKE_S3_BUCKETS: env.S3_BUCKET,
+  }, projectRoot);
+  await waitFor("the local mail catcher", () => httpOk(`http://127.0.0.1:${ports.mailHttp}/health`), 30_000);
+}
+
+export function buildApp(env: Record<string, string>): void {
+  say("building the app (next build)");
+  const result = spawnSync(process.execPath, [nextBin, "build"], { cwd: projectRoot, env: { ...process.env, ...env }, stdio: "inherit" });
+  if (result.status !== 0) throw new Error("next build failed");
+}
+
+export async function serveApp(mode: "start" | "dev" | "test", env: Record<string, string>): Promise<void> {
+  const port = portsFor(mode).app;
+  if (await portOpen(port)) throw new Error(`port ${port} is taken; is Hoebench already running? Stop it first.`);
+  const command = mode === "dev" ? "dev" : "start";
+  startChild("the app", process.execPath, [nextBin, command, "-p", String(port), "-H", "127.0.0.1"], { ...env, NODE_ENV: mode === "dev" ? "development" : "production" }, projectRoot);
+  await waitFor("the app", () => httpOk(`http://127.0.0.1:${port}/api/health`), mode === "dev" ? 180_000 : 60_000);
+}
+
+export async function bringUp(mode: Mode, database = databaseFor(mode)): Promise<Record<string, string>> {
+  const cluster = ensureCluster({ projectRoot, port: POSTGRES_PORT, fastUnsafe: mode === "test" });
+  if (cluster.startedHere) onShutdown(cluster.stop);
+  const env = appEnvironment(mode, database);
+  if (mode === "test") recreateDatabase(POSTGRES_PORT, database);
+  else if (ensureDatabase(POSTGRES_PORT, database)) say(`created database ${database}`);
+  await prepareDatabase(env.DATABASE_URL, { seed: true });
+  return env;
+}
+
