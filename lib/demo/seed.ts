@@ -2,6 +2,7 @@ import type { Sequelize } from "sequelize";
 import { hashPassword } from "@/lib/auth/password";
 import { randomizeLayout } from "@/lib/layout/randomize";
 import { Assessment, Membership, Plot, Site, Treatment, Trial, User } from "@/models";
+import { seedDemoObservations } from "./demo-observations";
 import { demoMemberships, demoProtocols, demoSites, demoTrials, demoUsers, DEMO_PASSWORD } from "./scenario";
 
 /** Seeds the demo into an empty database; a database with any user is left as it is. */
@@ -64,6 +65,7 @@ export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "alread
     for (const demo of demoMemberships) {
       await Membership.create({ trialId: trials.get(demo.trial)!.id, userId: users.get(demo.user)!.id, role: demo.role }, { transaction });
     }
+    await seedDemoObservations(sequelize, transaction);
   });
   return "seeded";
 }
