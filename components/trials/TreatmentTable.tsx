@@ -4,8 +4,8 @@ import type { TreatmentRecord } from "@/lib/data/treatments";
 import { cautionsFor } from "@/lib/safety/cautions";
 import { categoryNames } from "@/lib/trials/labels";
 
-function amount(value: number | null, digits = 1): string {
-  return value === null ? "—" : value.toLocaleString("en", { maximumFractionDigits: digits });
+function amount(value: number | null, unit: string, digits = 1): string {
+  return value === null ? "not given" : `${value.toLocaleString("en", { maximumFractionDigits: digits })} ${unit}`;
 }
 
 /** The treatment list as cards that read on a phone, each chemical, thermal or machine treatment with its cautions. */
@@ -38,11 +38,11 @@ export function TreatmentTable({ trialId, treatments }: { trialId: string; treat
               </div>
               <div>
                 <dt className="inline text-soil-700">Labour: </dt>
-                <dd className="inline">{amount(treatment.labourHoursPerHa)} h/ha</dd>
+                <dd className="inline">{amount(treatment.labourHoursPerHa, "h/ha")}</dd>
               </div>
               <div>
                 <dt className="inline text-soil-700">Material: </dt>
-                <dd className="inline">{amount(treatment.materialCostPerHa, 0)} per ha</dd>
+                <dd className="inline">{amount(treatment.materialCostPerHa, "per ha", 0)}</dd>
               </div>
             </dl>
             {cautions.length > 0 && (

@@ -25,15 +25,15 @@ const readOnly: Partial<Record<TrialStatus, string>> = {
 export function editRefusal(part: EditPart, situation: EditSituation): string | null {
   const frozen = readOnly[situation.status];
   if (frozen) return frozen;
+  // Active: the layout is staked out in the field and data are collected against it.
+  if (part === "structure" && situation.status === "active") {
+    return "This trial is active: its treatments, design and plots are in the field and can no longer change.";
+  }
   if (part === "structure" && situation.hasObservations) {
     return "Observations have been recorded against these plots; the treatments, design and plots can no longer change.";
   }
   if (part === "assessment" && situation.hasObservations) {
     return "Observations have been recorded for this assessment; it can no longer be edited or deleted.";
-  }
-  // Active: the layout is staked out in the field and data are collected against it.
-  if (part === "structure" && situation.status === "active") {
-    return "This trial is active: its treatments, design and plots are in the field and can no longer change.";
   }
   return null;
 }
