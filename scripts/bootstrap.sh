@@ -5,15 +5,14 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 export NEXT_TELEMETRY_DISABLED=1
 
+# Reinstall only when the locked dependency set changes (not when a script line is edited),
+# recorded as the lock file's checksum.
 stamp=node_modules/.hoebench-installed
-if [ ! -f "$stamp" ] || [ package-lock.json -nt "$stamp" ] || [ package.json -nt "$stamp" ]; then
+wanted=$(sha256sum package-lock.json | cut -d' ' -f1)
+if [ ! -f "$stamp" ] || [ "$(cat "$stamp")" != "$wanted" ] || [ ! -x node_modules/.bin/tsx ]; then
   echo "[hoebench] installing npm packages"
-  if [ -f package-lock.json ]; then
-    npm ci --no-audit --no-fund --loglevel=error
-  else
-    npm install --no-audit --no-fund --loglevel=error
-  fi
-  touch "$stamp"
+  npm ci --no-audit --no-fund --loglevel=error
+  echo "$wanted" > "$stamp"
 fi
 
 exec node_modules/.bin/tsx scripts/run.ts "$@"
