@@ -1,4 +1,5 @@
 import { createHash } from "node:crypto";
+import { Readable } from "node:stream";
 import Papa from "papaparse";
 import { RowChecker } from "./row-checker";
 import { sniffFile } from "./sniff";
@@ -26,8 +27,6 @@ function wrongDelimiter(firstLine: string): IngestProblem | null {
   return null;
 }
 
-class StopReading extends Error {}
-
 /**
  * Streams a data file through checks without holding it twice in memory: byte limit, file
  * type, UTF-8, delimiter, column and row limits, then every row through RowChecker.
@@ -40,80 +39,88 @@ export async function readCsv(source: AsyncIterable<Uint8Array>, context: Ingest
   const fatal: IngestProblem[] = [];
   let sizeBytes = 0;
   let rowNumber = 0;
-  let sniffed = false;
-  let firstText = true;
 
-  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { delimiter: ",", skipEmptyLines: false }) as unknown as NodeJS.ReadWriteStream;
-  const rowsDone = new Promise<void>((resolve, reject) => {
-    parser.on("data", (cells: string[]) => {
-      if (fatal.length) return;
-      rowNumber += 1;
-      if (rowNumber === 1 && cells.length > limits.maxColumns) {
-        fatal.push({ severity: "error", code: "too-many-columns", row: 1, message: `The header has ${cells.length} columns; a data file has at most ${limits.maxColumns}. Use the data sheet template.` });
-        return;
-      }
-      if (rowNumber - 1 > limits.maxRows) {
-        fatal.push({ severity: "error", code: "too-many-rows", message: `The file has more than ${limits.maxRows.toLocaleString("en-US")} rows, the most one upload may hold. Split it by assessment date.` });
-        return;
-      }
-      checker.accept(cells, rowNumber);
-    });
-    parser.on("end", resolve);
-    parser.on("error", reject);
-  });
-
-  try {
+  // Bytes become text here, with every whole-file check on the way; papaparse reads the text.
+  async function* text(): AsyncGenerator<string> {
+    let sniffed = false;
+    let firstText = true;
     for await (const chunk of source) {
       sizeBytes += chunk.byteLength;
       if (sizeBytes > limits.maxBytes) {
         fatal.push({ severity: "error", code: "too-large", message: `The file is larger than ${Math.round(limits.maxBytes / 1024 / 1024)} MB, the most one upload may be.` });
-        throw new StopReading();
+        return;
       }
       if (!sniffed) {
         sniffed = true;
         const problem = sniffFile(chunk);
         if (problem) {
           fatal.push(problem);
-          throw new StopReading();
+          return;
         }
       }
       hash.update(chunk);
-      let text: string;
+      let decoded: string;
       try {
-        text = decoder.decode(chunk, { stream: true });
+        decoded = decoder.decode(chunk, { stream: true });
       } catch {
         fatal.push({
           severity: "error",
           code: "encoding",
           message: 'The file is not UTF-8 text (it may be saved in an older Windows or Mac encoding). Save it as "CSV UTF-8 (comma-separated)" and upload it again.',
         });
-        throw new StopReading();
+        return;
       }
-      if (firstText && text.length > 0) {
+      if (firstText && decoded.length > 0) {
         firstText = false;
-        const problem = wrongDelimiter(text.replace(/^\ufeff/, "").split(/\r?\n/)[0]);
+        const problem = wrongDelimiter(decoded.replace(/^\ufeff/, "").split(/\r?\n/)[0]);
         if (problem) {
           fatal.push(problem);
-          throw new StopReading();
+          return;
         }
       }
-      parser.write(text);
-      if (fatal.length) throw new StopReading();
+      if (fatal.length) return;
+      if (decoded) yield decoded;
     }
-    if (!sniffed) fatal.push(sniffFile(new Uint8Array())!);
-    else {
-      try {
-        const tail = decoder.decode();
-        if (tail) parser.write(tail);
-      } catch {
-        fatal.push({ severity: "error", code: "encoding", message: "The file ends in the middle of a character; it is not complete UTF-8 text. Export it again." });
-      }
+    if (!sniffed) {
+      fatal.push(sniffFile(new Uint8Array())!);
+      return;
     }
-  } catch (error) {
-    if (!(error instanceof StopReading)) throw error;
+    try {
+      const tail = decoder.decode();
+      if (tail) yield tail;
+    } catch {
+      fatal.push({ severity: "error", code: "encoding", message: "The file ends in the middle of a character; it is not complete UTF-8 text. Export it again." });
+    }
   }
-  parser.end();
-  await rowsDone;
+
+  await new Promise<void>((resolve, reject) => {
+    // A Node stream with step() is papaparse's fast path; its NODE_STREAM_INPUT duplex is ~50× slower.
+    Papa.parse(Readable.from(text(), { objectMode: false }) as unknown as File, {
+      delimiter: ",",
+      skipEmptyLines: false,
+      step: (results: Papa.ParseStepResult<string[]>, parser: Papa.Parser) => {
+        if (fatal.length) {
+          parser.abort();
+          return;
+        }
+        const cells = results.data;
+        rowNumber += 1;
+        if (rowNumber === 1 && cells.length > limits.maxColumns) {
+          fatal.push({ severity: "error", code: "too-many-columns", row: 1, message: `The header has ${cells.length} columns; a data file has at most ${limits.maxColumns}. Use the data sheet template.` });
+          parser.abort();
+          return;
+        }
+        if (rowNumber - 1 > limits.maxRows) {
+          fatal.push({ severity: "error", code: "too-many-rows", message: `The file has more than ${limits.maxRows.toLocaleString("en-US")} rows, the most one upload may hold. Split it by assessment date.` });
+          parser.abort();
+          return;
+        }
+        checker.accept(cells, rowNumber);
+      },
+      complete: () => resolve(),
+      error: (error: Error) => reject(error),
+    });
+  });
 
   if (fatal.length) return { format: null, records: [], problems: fatal, rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
   return { ...checker.finish(), sizeBytes, sha256: hash.digest("hex") };

@@ -19,7 +19,8 @@ export class RowChecker {
   private headerSeen = false;
   private headerWidth = 0;
   private readonly plotsByNumber: Map<number, string>;
-  private readonly seen = new Map<string, number>();
+  /** Rows already seen per plot and quadrat (plot × 64 + quadrat), then per species. */
+  private readonly seen = new Map<number, Map<string, number>>();
   private readonly records: IngestRecord[] = [];
   private readonly problems: IngestProblem[] = [];
   private problemCount = 0;
@@ -117,10 +118,11 @@ export class RowChecker {
   }
 
   private acceptValue(raw: string | undefined, row: number, column: string, plotNumber: number, quadrat: number, species: string): void {
-    const where = `plot ${plotNumber}, quadrat ${quadrat}${species ? `, ${species}` : ""}`;
+    // Built only when there is something to report: most rows have nothing to say.
+    const where = () => `plot ${plotNumber}, quadrat ${quadrat}${species ? `, ${species}` : ""}`;
     const reading = readNumberCell(raw);
     if (reading.kind === "missing") {
-      this.report({ severity: "warning", code: "no-value", row, column, message: `Row ${row}: no value for ${where}; it is left out (a lost quadrat).` });
+      this.report({ severity: "warning", code: "no-value", row, column, message: `Row ${row}: no value for ${where()}; it is left out (a lost quadrat).` });
       return;
     }
     if (reading.kind === "decimal-comma") {
@@ -128,20 +130,26 @@ export class RowChecker {
       return;
     }
     if (reading.kind === "text") {
-      this.report({ severity: "error", code: "not-a-number", row, column, message: `Row ${row}: "${(raw ?? "").trim().slice(0, 40)}" for ${where} is not a number.` });
+      this.report({ severity: "error", code: "not-a-number", row, column, message: `Row ${row}: "${(raw ?? "").trim().slice(0, 40)}" for ${where()} is not a number.` });
       return;
     }
     if (reading.value < 0) {
-      this.report({ severity: "error", code: "negative", row, column, message: `Row ${row}: ${reading.value} for ${where} is negative; counts, weights and ratings cannot be.` });
+      this.report({ severity: "error", code: "negative", row, column, message: `Row ${row}: ${reading.value} for ${where()} is negative; counts, weights and ratings cannot be.` });
       return;
     }
-    const key = `${plotNumber}|${quadrat}|${species.toLowerCase()}`;
-    const earlier = this.seen.get(key);
+    const cell = plotNumber * 64 + quadrat;
+    let bySpecies = this.seen.get(cell);
+    if (!bySpecies) {
+      bySpecies = new Map();
+      this.seen.set(cell, bySpecies);
+    }
+    const speciesKey = species === "" ? "" : species.toLowerCase();
+    const earlier = bySpecies.get(speciesKey);
     if (earlier !== undefined) {
-      this.report({ severity: "error", code: "duplicate", row, column, message: `Row ${row}: ${where} already has a value in row ${earlier}. Keep one of them.` });
+      this.report({ severity: "error", code: "duplicate", row, column, message: `Row ${row}: ${where()} already has a value in row ${earlier}. Keep one of them.` });
       return;
     }
-    this.seen.set(key, row);
+    bySpecies.set(speciesKey, row);
     const { plausibleMin, plausibleMax } = this.context;
     if ((plausibleMin !== null && reading.value < plausibleMin) || (plausibleMax !== null && reading.value > plausibleMax)) {
       this.report({
@@ -149,7 +157,7 @@ export class RowChecker {
         code: "implausible",
         row,
         column,
-        message: `Row ${row}: ${reading.value} ${this.context.unit} for ${where} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
+        message: `Row ${row}: ${reading.value} ${this.context.unit} for ${where()} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
       });
     }
     this.records.push({ row, plotNumber, quadrat, species, value: reading.value });
