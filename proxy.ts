@@ -7,5 +7,5 @@ import { withAuth } from "next-auth/middleware";
 export default withAuth({ pages: { signIn: "/signin" } });
 
 export const config = {
-  matcher: ["/((?!api|_next/static|_next/image|favicon.ico|fonts|signin|register|library|published).*)"],
+  matcher: ["/((?!api|_next/static|_next/image|favicon.ico|fonts|signin|register|invite|forgot-password|reset-password|library|published).*)"],
 };

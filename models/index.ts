@@ -11,8 +11,14 @@ import { Treatment } from "./Treatment";
 import { Trial } from "./Trial";
 import { Upload } from "./Upload";
 import { User } from "./User";
+import { Invitation } from "./Invitation";
+import { MailMessage } from "./MailMessage";
+import { NotificationDigestItem } from "./NotificationDigestItem";
+import { NotificationSetting } from "./NotificationSetting";
+import { PasswordResetToken } from "./PasswordResetToken";
 
 export { Assessment, AuditEvent, DatasetVersion, Membership, Observation, Photo, Plot, Site, Treatment, Trial, Upload, User };
+export { Invitation, MailMessage, NotificationDigestItem, NotificationSetting, PasswordResetToken };
 
 const initializedWith = new WeakSet<Sequelize>();
 
@@ -35,6 +41,11 @@ export function initModels(sequelize: Sequelize): void {
   Observation.initModel(sequelize);
   AuditEvent.initModel(sequelize);
   Photo.initModel(sequelize);
+  MailMessage.initModel(sequelize);
+  Invitation.initModel(sequelize);
+  PasswordResetToken.initModel(sequelize);
+  NotificationSetting.initModel(sequelize);
+  NotificationDigestItem.initModel(sequelize);
 
   Trial.belongsTo(Site, { as: "site", foreignKey: "siteId" });
   Trial.belongsTo(User, { as: "owner", foreignKey: "ownerId" });
@@ -54,4 +65,6 @@ export function initModels(sequelize: Sequelize): void {
   Observation.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
   AuditEvent.belongsTo(User, { as: "user", foreignKey: "userId" });
   Photo.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
+  Invitation.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
+  Invitation.belongsTo(User, { as: "invitedBy", foreignKey: "invitedById" });
 }

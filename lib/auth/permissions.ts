@@ -11,6 +11,8 @@ import type { Role } from "./roles";
 export const permissions = {
   "user:manage": { scope: "global", roles: ["admin"] },
   "mail:read-caught": { scope: "global", roles: ["admin"] },
+  "mail:manage-queue": { scope: "global", roles: ["admin"] },
+  "notifications:manage-own": { scope: "global", roles: ["admin", "researcher", "technician", "reviewer", "grower"] },
   "trial:create": { scope: "global", roles: ["admin", "researcher"] },
   "trial:list": { scope: "global", roles: ["admin", "researcher", "technician", "reviewer"] },
   "site:manage": { scope: "global", roles: ["admin", "researcher"] },

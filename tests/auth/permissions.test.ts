@@ -11,10 +11,11 @@ const allowed: Record<Role, Permission[]> = {
     "trial:create", "trial:list", "site:manage", "published:read", "follow:manage", "trial:read", "trial:edit",
     "trial:randomize", "trial:change-status", "trial:manage-team", "observation:write", "upload:create",
     "analysis:read", "review:request", "review:comment", "audit:read", "summary:edit", "trial:publish",
+    "notifications:manage-own",
   ],
-  technician: ["trial:list", "published:read", "trial:read", "observation:write", "upload:create", "analysis:read"],
-  reviewer: ["trial:list", "published:read", "follow:manage", "trial:read", "analysis:read", "review:comment", "review:approve", "audit:read"],
-  grower: ["published:read", "follow:manage"],
+  technician: ["trial:list", "published:read", "trial:read", "observation:write", "upload:create", "analysis:read", "notifications:manage-own"],
+  reviewer: ["trial:list", "published:read", "follow:manage", "trial:read", "analysis:read", "review:comment", "review:approve", "audit:read", "notifications:manage-own"],
+  grower: ["published:read", "follow:manage", "notifications:manage-own"],
 };
 
 describe("role → permission table", () => {
