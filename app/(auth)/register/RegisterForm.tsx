@@ -39,7 +39,7 @@ export function RegisterForm() {
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4">
       <h1 className="text-lg font-semibold">Create a grower account</h1>
       <p className="text-sm text-soil-700">
         Growers read published trial results and can follow crops and methods. Researchers, technicians and reviewers are

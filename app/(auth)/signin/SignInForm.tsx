@@ -36,7 +36,7 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4">
       <h1 className="text-lg font-semibold">Sign in</h1>
       {error && (
         <p role="alert" className="rounded bg-red-50 px-3 py-2 text-sm text-red-800">
