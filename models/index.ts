@@ -11,6 +11,8 @@ import { Treatment } from "./Treatment";
 import { Trial } from "./Trial";
 import { Upload } from "./Upload";
 import { User } from "./User";
+import { Follow } from "./Follow";
+import { TrialSummary } from "./TrialSummary";
 import { Invitation } from "./Invitation";
 import { MailMessage } from "./MailMessage";
 import { NotificationDigestItem } from "./NotificationDigestItem";
@@ -18,6 +20,7 @@ import { NotificationSetting } from "./NotificationSetting";
 import { PasswordResetToken } from "./PasswordResetToken";
 
 export { Assessment, AuditEvent, DatasetVersion, Membership, Observation, Photo, Plot, Site, Treatment, Trial, Upload, User };
+export { Follow, TrialSummary };
 export { Invitation, MailMessage, NotificationDigestItem, NotificationSetting, PasswordResetToken };
 
 const initializedWith = new WeakSet<Sequelize>();
@@ -41,6 +44,8 @@ export function initModels(sequelize: Sequelize): void {
   Observation.initModel(sequelize);
   AuditEvent.initModel(sequelize);
   Photo.initModel(sequelize);
+  TrialSummary.initModel(sequelize);
+  Follow.initModel(sequelize);
   MailMessage.initModel(sequelize);
   Invitation.initModel(sequelize);
   PasswordResetToken.initModel(sequelize);
