@@ -7,6 +7,9 @@ const tabs = [
   { key: "labels", label: "Stake labels", path: "/labels" },
   { key: "sheets", label: "Data sheets", path: "/sheets" },
   { key: "data", label: "Field data", path: "/data" },
+  { key: "results", label: "Results", path: "/results" },
+  { key: "review", label: "Review", path: "/review" },
+  { key: "report", label: "Report", path: "/report" },
   { key: "audit", label: "Audit trail", path: "/audit" },
 ] as const;
 export type TrialTab = (typeof tabs)[number]["key"];

@@ -4,6 +4,7 @@ import { db } from "@/lib/db/sequelize";
 import { plotValuesOf, type PlotValueRow } from "@/lib/data/assessment-data";
 import { analyzeTrial, type TrialAnalysis } from "@/lib/stats";
 import type { Assessment, Trial } from "@/models";
+import { designColumns, type AnalysisRow } from "./build-results";
 
 export interface AssessmentAnalysisOptions {
   transform?: "none" | "sqrt" | "log1p" | "asin-sqrt";
@@ -23,11 +24,14 @@ export interface AssessmentAnalysis {
   lostPlots: number[];
 }
 
-/**
- * The one way the app analyses an assessment: the current plot values, laid out as the
- * trial's design, through the statistics engine (lib/stats). Treatments are their codes.
- */
-export async function analyzeAssessment(trial: Trial, assessment: Assessment | { id: string; variable: Assessment["variable"]; unit: string }, options: AssessmentAnalysisOptions = {}): Promise<AssessmentAnalysis> {
+export interface AssessmentRows {
+  rows: AnalysisRow[];
+  plotValues: PlotValueRow[];
+  unit: string;
+}
+
+/** Every plot of the trial with its current value of one assessment ("NA" when lost), as the engine reads them. */
+export async function assessmentRows(trial: Trial, assessment: Assessment | { id: string; variable: Assessment["variable"]; unit: string }): Promise<AssessmentRows> {
   const [values, plots] = await Promise.all([
     plotValuesOf(trial, assessment),
     db().query<{ number: number; block: number; row: number; column: number; treatmentCode: string }>(
@@ -37,16 +41,25 @@ export async function analyzeAssessment(trial: Trial, assessment: Assessment | {
     ),
   ]);
   const valueByPlot = new Map(values.map((value) => [value.plotNumber, value.value]));
-  const rows = plots.map((plot) => ({
+  const rows: AnalysisRow[] = plots.map((plot) => ({
+    plotNumber: plot.number,
     treatment: plot.treatmentCode,
     block: String(plot.block),
     row: String(plot.row),
     column: String(plot.column),
     response: valueByPlot.has(plot.number) ? valueByPlot.get(plot.number)! : "NA",
   }));
-  const design = trial.design === "latin" ? { design: "latin" as const, row: "row", column: "column" } : trial.design === "crd" ? { design: "crd" as const } : { design: "rcbd" as const, block: "block" };
+  return { rows, plotValues: values, unit: values[0]?.unit ?? assessment.unit };
+}
+
+/**
+ * The one way the app analyses an assessment: the current plot values, laid out as the
+ * trial's design, through the statistics engine (lib/stats). Treatments are their codes.
+ */
+export async function analyzeAssessment(trial: Trial, assessment: Assessment | { id: string; variable: Assessment["variable"]; unit: string }, options: AssessmentAnalysisOptions = {}): Promise<AssessmentAnalysis> {
+  const { rows, plotValues, unit } = await assessmentRows(trial, assessment);
   const analysis = analyzeTrial(rows, {
-    ...design,
+    ...designColumns(trial.design),
     response: "response",
     treatment: "treatment",
     transform: options.transform ?? "none",
@@ -57,8 +70,8 @@ export async function analyzeAssessment(trial: Trial, assessment: Assessment | {
   });
   return {
     analysis,
-    plotValues: values,
-    unit: values[0]?.unit ?? assessment.unit,
-    lostPlots: plots.filter((plot) => !valueByPlot.has(plot.number)).map((plot) => plot.number),
+    plotValues,
+    unit,
+    lostPlots: rows.filter((row) => row.response === "NA").map((row) => row.plotNumber),
   };
 }
