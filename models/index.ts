@@ -11,6 +11,8 @@ import { Treatment } from "./Treatment";
 import { Trial } from "./Trial";
 import { Upload } from "./Upload";
 import { User } from "./User";
+import { ReviewComment } from "./ReviewComment";
+import { ReviewRequest } from "./ReviewRequest";
 import { Follow } from "./Follow";
 import { TrialSummary } from "./TrialSummary";
 import { Invitation } from "./Invitation";
@@ -22,6 +24,7 @@ import { PasswordResetToken } from "./PasswordResetToken";
 export { Assessment, AuditEvent, DatasetVersion, Membership, Observation, Photo, Plot, Site, Treatment, Trial, Upload, User };
 export { Follow, TrialSummary };
 export { Invitation, MailMessage, NotificationDigestItem, NotificationSetting, PasswordResetToken };
+export { ReviewComment, ReviewRequest };
 
 const initializedWith = new WeakSet<Sequelize>();
 
@@ -44,6 +47,8 @@ export function initModels(sequelize: Sequelize): void {
   Observation.initModel(sequelize);
   AuditEvent.initModel(sequelize);
   Photo.initModel(sequelize);
+  ReviewRequest.initModel(sequelize);
+  ReviewComment.initModel(sequelize);
   TrialSummary.initModel(sequelize);
   Follow.initModel(sequelize);
   MailMessage.initModel(sequelize);
@@ -70,6 +75,8 @@ export function initModels(sequelize: Sequelize): void {
   Observation.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
   AuditEvent.belongsTo(User, { as: "user", foreignKey: "userId" });
   Photo.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
+  ReviewComment.belongsTo(User, { as: "author", foreignKey: "authorId" });
+  ReviewRequest.belongsTo(User, { as: "requestedBy", foreignKey: "requestedById" });
   Invitation.belongsTo(Trial, { as: "trial", foreignKey: "trialId" });
   Invitation.belongsTo(User, { as: "invitedBy", foreignKey: "invitedById" });
 }

@@ -1,5 +1,7 @@
 import { redirect } from "next/navigation";
+import { ReviewQueue } from "@/components/review/ReviewQueue";
 import { TrialList } from "@/components/trials/TrialList";
+import { reviewStatusByTrial } from "@/lib/data/reviews";
 import { currentUser } from "@/lib/auth/session";
 import { trialsForHome } from "@/lib/data/trials";
 import type { Role } from "@/lib/auth/roles";
@@ -31,10 +33,17 @@ export default async function HomePage() {
   if (!user) redirect("/signin");
   const trials = await trialsForHome(user);
   const heading = headings[user.role];
+  const reviewStatus = user.role === "reviewer" || user.role === "researcher" ? await reviewStatusByTrial(trials.map((trial) => trial.id)) : null;
   return (
     <section>
       <h1 className="text-2xl font-semibold">{heading.title}</h1>
       <p className="mb-4 text-soil-700">{heading.lead}</p>
+      {reviewStatus && (
+        <ReviewQueue
+          heading={user.role === "reviewer" ? "Review requests" : "Review status"}
+          items={trials.filter((trial) => trial.status !== "draft").map((trial) => ({ id: trial.id, title: trial.title, status: reviewStatus.get(trial.id) ?? "none" }))}
+        />
+      )}
       <TrialList trials={trials} empty={heading.empty} />
     </section>
   );
