@@ -1,0 +1,38 @@
+import { CreateBucketCommand, GetObjectCommand, HeadBucketCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import type { AppConfig } from "@/lib/config";
+
+/** A plain S3 client for operations scripts (the app's own module is server-only). */
+export function objectStore(settings: AppConfig) {
+  const client = new S3Client({
+    endpoint: settings.S3_ENDPOINT,
+    region: settings.S3_REGION,
+    forcePathStyle: settings.S3_FORCE_PATH_STYLE,
+    credentials: { accessKeyId: settings.S3_ACCESS_KEY_ID, secretAccessKey: settings.S3_SECRET_ACCESS_KEY },
+    requestChecksumCalculation: "WHEN_REQUIRED",
+    responseChecksumValidation: "WHEN_REQUIRED",
+  });
+  return {
+    async get(bucket: string, key: string): Promise<Buffer | null> {
+      try {
+        const response = await client.send(new GetObjectCommand({ Bucket: bucket, Key: key }));
+        return Buffer.from(await response.Body!.transformToByteArray());
+      } catch (error) {
+        if ((error as Error).name === "NoSuchKey" || (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return null;
+        throw error;
+      }
+    },
+    async put(bucket: string, key: string, body: Buffer): Promise<void> {
+      await client.send(new PutObjectCommand({ Bucket: bucket, Key: key, Body: body }));
+    },
+    async ensureEmptyBucket(bucket: string): Promise<void> {
+      try {
+        await client.send(new HeadBucketCommand({ Bucket: bucket }));
+      } catch {
+        await client.send(new CreateBucketCommand({ Bucket: bucket }));
+      }
+      const listing = await client.send(new ListObjectsV2Command({ Bucket: bucket, MaxKeys: 1 }));
+      if ((listing.KeyCount ?? 0) > 0) throw new Error(`bucket ${bucket} is not empty; restore only into an empty bucket`);
+    },
+    close: () => client.destroy(),
+  };
+}
