@@ -18,8 +18,12 @@ const homeLabel: Record<Role, string> = {
 
 const items: NavItem[] = [
   { href: "/trials", label: "Trials", permission: "trial:list" },
+  { href: "/library", label: "Library" },
+  { href: "/following", label: "Following", permission: "follow:manage", roles: ["grower"] },
   { href: "/admin/users", label: "Users", permission: "user:manage" },
   { href: "/admin/mail", label: "Caught mail", permission: "mail:read-caught" },
+  { href: "/admin/mail-queue", label: "Mail queue", permission: "mail:manage-queue" },
+  { href: "/settings", label: "Settings", permission: "notifications:manage-own" },
 ];
 
 /** The navigation a role sees; the role table decides, not the page. */

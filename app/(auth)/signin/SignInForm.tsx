@@ -48,6 +48,9 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
       <Button type="submit" disabled={busy} className="w-full">
         {busy ? "Signing in…" : "Sign in"}
       </Button>
+      <p className="text-center text-sm">
+        <Link href="/forgot-password" className="text-leaf-700 underline">Forgot password?</Link>
+      </p>
       <p className="text-center text-sm text-soil-700">
         Grower without an account? <Link href="/register" className="text-leaf-700 underline">Create one</Link>
       </p>

@@ -3,6 +3,7 @@ import { notFound, redirect } from "next/navigation";
 import { can } from "@/lib/auth/permissions";
 import { currentUser } from "@/lib/auth/session";
 import { caughtMail } from "@/lib/data/caught-mail";
+import { previewDocument } from "@/lib/mail/caught-preview";
 
 export const metadata: Metadata = { title: "Caught mail" };
 export const dynamic = "force-dynamic";
@@ -17,7 +18,7 @@ export default async function CaughtMailPage() {
     <section>
       <h1 className="text-2xl font-semibold">Caught mail</h1>
       <p className="mb-4 text-soil-700">
-        On this development machine no mail leaves: everything Hoebench sends is held by the local catcher and shown here.
+        On this development machine no mail leaves: everything Hoebench sends is held by the local catcher and shown here. Links in a message open in a new tab.
       </p>
       {messages === undefined && <p role="alert" className="rounded bg-red-50 p-3 text-red-800">The local mail catcher is not answering.</p>}
       {messages?.length === 0 && <p className="rounded border border-dashed border-soil-200 bg-white p-6">No mail caught yet.</p>}
@@ -28,7 +29,24 @@ export default async function CaughtMailPage() {
             <p className="text-sm text-soil-700">
               To {message.to.join(", ")} · from {message.from} · {new Date(message.receivedAt).toLocaleString("en-GB", { timeZone: "UTC" })} UTC
             </p>
-            <pre className="mt-2 whitespace-pre-wrap break-words text-sm">{message.text}</pre>
+            {message.html ? (
+              <>
+                <iframe
+                  title={`Mail: ${message.subject || "(no subject)"}`}
+                  srcDoc={previewDocument(message.html)}
+                  sandbox="allow-popups allow-popups-to-escape-sandbox"
+                  referrerPolicy="no-referrer"
+                  className="mt-3 h-96 w-full rounded border border-soil-200 bg-white"
+                  data-testid="caught-mail-html"
+                />
+                <details className="mt-2 text-sm">
+                  <summary className="cursor-pointer text-soil-700">Plain-text part</summary>
+                  <pre className="mt-2 whitespace-pre-wrap break-words">{message.text}</pre>
+                </details>
+              </>
+            ) : (
+              <pre className="mt-2 whitespace-pre-wrap break-words text-sm">{message.text}</pre>
+            )}
           </li>
         ))}
       </ul>

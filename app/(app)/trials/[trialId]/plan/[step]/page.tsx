@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { StatusBadge } from "@/components/trials/StatusBadge";
+import { TeamInvitations } from "@/components/invitations/TeamInvitations";
 import { AssessmentsStep } from "@/components/wizard/AssessmentsStep";
 import { BasicsStep } from "@/components/wizard/BasicsStep";
 import { DesignStep } from "@/components/wizard/DesignStep";
@@ -130,7 +131,12 @@ export default async function PlanStepPage({ params }: { params: Promise<{ trial
     case "team": {
       reason = editRefusal("team", { status: trial.status, hasObservations: false });
       const [members, candidates] = await Promise.all([teamOf(trial.id), teamCandidates()]);
-      body = <TeamStep trialId={trial.id} initial={members} candidates={candidates} readOnlyReason={reason} />;
+      body = (
+        <>
+          <TeamStep trialId={trial.id} initial={members} candidates={candidates} readOnlyReason={reason} />
+          <TeamInvitations trialId={trial.id} readOnlyReason={reason} />
+        </>
+      );
       break;
     }
   }
