@@ -14,13 +14,40 @@ export function fromZodError(error: z.ZodError, message = "Some fields need atte
   );
 }
 
+const connectionErrorNames = new Set([
+  "SequelizeConnectionError",
+  "SequelizeConnectionRefusedError",
+  "SequelizeConnectionAcquireTimeoutError",
+  "SequelizeConnectionTimedOutError",
+  "SequelizeHostNotFoundError",
+  "SequelizeHostNotReachableError",
+  "SequelizeAccessDeniedError",
+]);
+// PostgreSQL's codes for a server that is shutting down, refusing, or gone (class 08 and 57P).
+const connectionSqlStates = /^(08|57P0[1-3])/;
+
+/** A database that is down is a passing fault the user can wait out, not a bug. */
+export function isDatabaseUnavailable(error: unknown): boolean {
+  if (!(error instanceof Error)) return false;
+  if (connectionErrorNames.has(error.name)) return true;
+  const parent = (error as { parent?: { code?: string; message?: string } }).parent ?? (error as { original?: { code?: string; message?: string } }).original;
+  const code = parent?.code ?? (error as { code?: string }).code;
+  if (typeof code === "string" && (connectionSqlStates.test(code) || code === "ECONNREFUSED" || code === "ECONNRESET")) return true;
+  return /Connection terminated|terminating connection|ECONNREFUSED|does not allow connections/i.test(parent?.message ?? error.message);
+}
+
+export const databaseUnavailable = () =>
+  new AppError("UNAVAILABLE", "The database is not answering. Nothing was saved; try again in a minute.");
+
 /** Turns any thrown value into a JSON response; unknown errors never leak their details. */
 export function errorResponse(error: unknown): NextResponse<ErrorBody> {
   const appError = isAppError(error)
     ? error
     : error instanceof z.ZodError
       ? fromZodError(error)
-      : null;
+      : isDatabaseUnavailable(error)
+        ? databaseUnavailable()
+        : null;
   if (!appError) {
     console.error("unexpected error", error);
     return NextResponse.json(

@@ -2,7 +2,7 @@ import "server-only";
 import type { NextRequest } from "next/server";
 import { z } from "zod";
 import { AppError, type FieldProblem } from "@/lib/errors";
-import { errorResponse, fromZodError } from "@/lib/http";
+import { databaseUnavailable, errorResponse, fromZodError, isDatabaseUnavailable } from "@/lib/http";
 import type { Trial } from "@/models";
 import type { Permission } from "./permissions";
 import { currentUser, type SessionUser } from "./session";
@@ -87,8 +87,9 @@ export function action<S extends Schema, T>(
       const trial = await authorize(user, spec.permission, await spec.trialId?.(input));
       return { ok: true, data: await handle({ user, input, trial }) };
     } catch (error) {
-      if (error instanceof AppError) {
-        return { ok: false, error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
+      const known = error instanceof AppError ? error : isDatabaseUnavailable(error) ? databaseUnavailable() : null;
+      if (known) {
+        return { ok: false, error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) } };
       }
       console.error("server action failed", error);
       return { ok: false, error: { code: "INTERNAL", message: "Something went wrong on our side. Nothing was changed; please try again." } };

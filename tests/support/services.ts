@@ -1,0 +1,50 @@
+import { spawn, spawnSync } from "node:child_process";
+import path from "node:path";
+import { databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName } from "@/scripts/lib/environment";
+import { psql } from "@/scripts/lib/postgres";
+
+/** Cuts the test database off as a stopped server would: every connection dropped, none accepted. */
+export function takeDatabaseDown(): void {
+  const database = databaseFor("test");
+  psql(POSTGRES_PORT, `ALTER DATABASE "${database}" WITH ALLOW_CONNECTIONS false`);
+  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = '${database}' AND pid <> pg_backend_pid()`);
+}
+
+export function bringDatabaseBack(): void {
+  psql(POSTGRES_PORT, `ALTER DATABASE "${databaseFor("test")}" WITH ALLOW_CONNECTIONS true`);
+}
+
+function listenerPid(port: number): number | null {
+  const output = spawnSync("ss", ["-ltnpH", `sport = :${port}`], { encoding: "utf8" }).stdout;
+  const match = /pid=(\d+)/.exec(output);
+  return match ? Number(match[1]) : null;
+}
+
+/** Stops this test run's S3 and mail fakes (one process), as an outage would. */
+export async function stopFakes(): Promise<void> {
+  const pid = listenerPid(portsFor("test").s3);
+  if (!pid) throw new Error("the S3 fake is not running");
+  process.kill(pid, "SIGTERM");
+  for (let attempt = 0; attempt < 50 && listenerPid(portsFor("test").s3); attempt += 1) await new Promise((resolve) => setTimeout(resolve, 100));
+}
+
+/** Starts them again on the same ports and storage folder, as the test command had them. */
+export async function startFakesAgain(): Promise<void> {
+  const ports = portsFor("test");
+  const child = spawn(path.join(projectRoot, "node_modules/.bin/tsx"), [path.join(projectRoot, "scripts/fakes.ts")], {
+    cwd: projectRoot,
+    detached: true,
+    stdio: "ignore",
+    env: {
+      ...process.env,
+      FAKE_S3_PORT: String(ports.s3),
+      FAKE_SMTP_PORT: String(ports.smtp),
+      FAKE_MAIL_HTTP_PORT: String(ports.mailHttp),
+      FAKE_STATE_DIR: path.join(stateRoot, testStateName("fakes-test")),
+      FAKE_S3_BUCKETS: process.env.S3_BUCKET ?? "hoebench-test",
+    },
+  });
+  child.unref();
+  for (let attempt = 0; attempt < 100 && !listenerPid(ports.s3); attempt += 1) await new Promise((resolve) => setTimeout(resolve, 100));
+  if (!listenerPid(ports.s3)) throw new Error("the fakes did not come back");
+}
