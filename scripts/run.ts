@@ -38,7 +38,11 @@ async function serve(mode: "start" | "dev"): Promise<void> {
 
 async function test(args: string[]): Promise<void> {
   const filters = args.filter((arg) => !arg.startsWith("--"));
-  const runBrowser = filters.length === 0 || args.includes("--e2e");
+  // Names ending in .spec.ts pick browser tests; any other name picks unit and integration suites.
+  const browserFilters = filters.filter((filter) => filter.endsWith(".spec.ts"));
+  const unitFilters = filters.filter((filter) => !filter.endsWith(".spec.ts"));
+  const runUnits = filters.length === 0 || unitFilters.length > 0;
+  const runBrowser = filters.length === 0 || browserFilters.length > 0 || args.includes("--e2e");
   // --server: serve the app for HTTP-level suites without running the browser tests.
   const withServer = runBrowser || args.includes("--server");
   if (runBrowser) ensureDebianPackages("/usr/bin/chromium", ["chromium"]);
@@ -54,18 +58,20 @@ async function test(args: string[]): Promise<void> {
   mkdirSync(reports, { recursive: true });
   const childEnv = { ...process.env, ...env, HOEBENCH_TEST: "1", NODE_ENV: "test" } as NodeJS.ProcessEnv;
 
-  say("running unit and integration tests (vitest)");
-  spawnSync(process.execPath, [path.join(projectRoot, "node_modules/vitest/vitest.mjs"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${path.join(reports, "vitest.json")}`, ...filters], {
-    cwd: projectRoot, env: childEnv, stdio: "inherit",
-  });
+  if (runUnits) {
+    say("running unit and integration tests (vitest)");
+    spawnSync(process.execPath, [path.join(projectRoot, "node_modules/vitest/vitest.mjs"), "run", "--reporter=default", "--reporter=json", `--outputFile.json=${path.join(reports, "vitest.json")}`, ...unitFilters], {
+      cwd: projectRoot, env: childEnv, stdio: "inherit",
+    });
+  }
   if (runBrowser) {
     say("running browser tests (playwright, Debian chromium)");
-    spawnSync(process.execPath, [path.join(projectRoot, "node_modules/@playwright/test/cli.js"), "test", "--reporter=list,json"], {
+    spawnSync(process.execPath, [path.join(projectRoot, "node_modules/@playwright/test/cli.js"), "test", "--reporter=list,json", ...browserFilters], {
       cwd: projectRoot, env: { ...childEnv, PLAYWRIGHT_JSON_OUTPUT_NAME: path.join(reports, "playwright.json") }, stdio: "inherit",
     });
   }
   stopChildren();
-  const summary = summarizeReports(reports, { expectBrowser: runBrowser });
+  const summary = summarizeReports(reports, { expectUnits: runUnits, expectBrowser: runBrowser });
   process.stdout.write(`${summary.line}\n`);
   shutdown(summary.failed > 0 || summary.passed === 0 ? 1 : 0);
 }

@@ -38,7 +38,8 @@ export function PlotEntry({ trialId, plotNumber, assessments, initialAssessmentI
       setState({ kind: "unsaved" });
     } else {
       setDraft(Object.fromEntries(Object.entries(assessment.current).map(([quadrat, value]) => [quadrat, String(value)])));
-      setState({ kind: "clean" });
+      // A refresh after saving brings the saved values back: keep saying they were saved.
+      setState((previous) => (previous.kind === "saved" ? previous : { kind: "clean" }));
     }
   }, [trialId, plotNumber, assessment]);
 

@@ -132,6 +132,7 @@ export function UploadPanel({ trialId, assessmentId, unit, needsReason, maxMegab
           </p>
           <ProblemList problems={result.problems} />
           {result.preview.length > 0 && (
+            <div className="max-h-96 overflow-y-auto">
             <DataTable
               rows={result.preview}
               columns={columns}
@@ -139,6 +140,7 @@ export function UploadPanel({ trialId, assessmentId, unit, needsReason, maxMegab
               rowClassName={(row) => (flaggedRows.has(row.row) ? "bg-amber-50" : "")}
               caption={result.preview.length < result.rowCount ? `First ${result.preview.length} values` : "Values to be saved"}
             />
+            </div>
           )}
           {result.errors > 0 ? (
             <p className="text-sm text-red-800">Nothing has been saved. Fix the errors in your file and upload it again.</p>

@@ -32,10 +32,11 @@ function playwrightCounts(file: string): Counts {
 }
 
 /** The closing line CI reads: `N passed, N failed` (and skipped ones, if any). */
-export function summarizeReports(folder: string, options: { expectBrowser: boolean }): Counts & { line: string } {
-  const parts = [vitestCounts(path.join(folder, "vitest.json"))];
+export function summarizeReports(folder: string, options: { expectUnits: boolean; expectBrowser: boolean }): Counts & { line: string } {
+  const parts: Counts[] = [];
+  if (options.expectUnits) parts.push(vitestCounts(path.join(folder, "vitest.json")));
   if (options.expectBrowser) parts.push(playwrightCounts(path.join(folder, "playwright.json")));
-  const total = parts.reduce((sum, part) => ({ passed: sum.passed + part.passed, failed: sum.failed + part.failed, skipped: sum.skipped + part.skipped }));
+  const total = parts.reduce((sum, part) => ({ passed: sum.passed + part.passed, failed: sum.failed + part.failed, skipped: sum.skipped + part.skipped }), { passed: 0, failed: 0, skipped: 0 });
   const line = `${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ""}`;
   return { ...total, line };
 }
