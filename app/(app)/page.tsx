@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { ReviewQueue } from "@/components/review/ReviewQueue";
 import { TrialList } from "@/components/trials/TrialList";
@@ -37,7 +38,18 @@ export default async function HomePage() {
   return (
     <section>
       <h1 className="text-2xl font-semibold">{heading.title}</h1>
-      <p className="mb-4 text-soil-700">{heading.lead}</p>
+      <p className="mb-4 text-soil-700">
+        {heading.lead}
+        {user.role === "grower" && (
+          <>
+            {" "}
+            <Link href="/library" className="text-leaf-700 underline">
+              Search the library
+            </Link>{" "}
+            by crop, method, region and season.
+          </>
+        )}
+      </p>
       {reviewStatus && (
         <ReviewQueue
           heading={user.role === "reviewer" ? "Review requests" : "Review status"}

@@ -10,6 +10,7 @@ const tabs = [
   { key: "results", label: "Results", path: "/results" },
   { key: "review", label: "Review", path: "/review" },
   { key: "report", label: "Report", path: "/report" },
+  { key: "summary", label: "Summary", path: "/summary" },
   { key: "audit", label: "Audit trail", path: "/audit" },
 ] as const;
 export type TrialTab = (typeof tabs)[number]["key"];
