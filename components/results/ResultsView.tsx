@@ -138,13 +138,13 @@ function ResultsBody({ results }: { results: AssessmentResults }) {
         </div>
       )}
       {results.anova.length > 0 && (
-        <section className="grid gap-6 lg:grid-cols-2">
+        <section className="grid items-start gap-6 lg:grid-cols-2 [&>*]:min-w-0">
           <AnovaTable anova={results.anova} cvPercent={results.cvPercent} grandMean={results.grandMean} lsd={results.lsd} alpha={results.options.alpha} unit={results.assessment.unit} transformed={transformed} />
           <MeansTable results={results} />
         </section>
       )}
       {results.means.length > 0 && (
-        <section className="grid gap-4 lg:grid-cols-2" aria-label="Charts">
+        <section className="grid gap-4 lg:grid-cols-2 [&>*]:min-w-0" aria-label="Charts">
           <MeansChart results={results} />
           <BoxChart results={results} />
         </section>
@@ -152,7 +152,7 @@ function ResultsBody({ results }: { results: AssessmentResults }) {
       {results.diagnostics.points.length > 0 && (
         <section aria-labelledby="diagnostics-heading">
           <h2 id="diagnostics-heading" className="mb-2 text-lg font-semibold">Diagnostics</h2>
-          <div className="grid gap-4 lg:grid-cols-3">
+          <div className="grid gap-4 lg:grid-cols-3 [&>*]:min-w-0">
             <ResidualChart results={results} />
             <QqChart results={results} />
             <div className="rounded border border-soil-200 bg-white p-3 text-sm" data-testid="assumptions">

@@ -81,7 +81,7 @@ export default async function ReportPage({ params, searchParams }: { params: Pro
               {results.warnings.length > 0 && (
                 <ul className="ml-5 list-disc text-xs text-amber-900">{results.warnings.map((warning) => <li key={warning}>{warning}</li>)}</ul>
               )}
-              <div className="grid gap-4 lg:grid-cols-2 print:grid-cols-1">
+              <div className="grid items-start gap-4 lg:grid-cols-2 print:grid-cols-1 [&>*]:min-w-0">
                 <AnovaTable anova={results.anova} cvPercent={results.cvPercent} grandMean={results.grandMean} lsd={results.lsd} alpha={results.options.alpha} unit={results.assessment.unit} transformed={results.options.transform !== "none"} />
                 <StaticMeansTable results={results} />
               </div>
