@@ -1,3 +1,4 @@
+import { writeFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
 
 const PASSWORD = "hoebench-demo";
@@ -56,5 +57,7 @@ test("researcher asks for review, reviewer comments and approves, the trial lock
   await page.emulateMedia({ media: "screen" });
   const pdf = await page.request.get(`/api/reports/${trialId}/pdf`);
   expect(pdf.status()).toBe(200);
-  expect((await pdf.body()).subarray(0, 5).toString()).toBe("%PDF-");
+  const bytes = await pdf.body();
+  expect(bytes.subarray(0, 5).toString()).toBe("%PDF-");
+  writeFileSync("test-results/technical-report.pdf", bytes);
 });
