@@ -59,3 +59,12 @@ test("a grower cannot open a trial's results", async ({ page }) => {
   const response = await page.goto(url);
   expect(response?.status()).toBe(404);
 });
+
+test("the lettuce protocol at two sites is analysed combined, with the site × treatment test", async ({ page }) => {
+  await signIn(page, "researcher@hoebench.test");
+  await page.goto("/combined");
+  await page.getByRole("link", { name: "Weed density, 42 days after planting" }).click();
+  await expect(page.getByTestId("site-by-treatment")).toContainText("Site × treatment: F =");
+  await expect(page.getByTestId("anova-table")).toContainText("Site × treatment");
+  await page.screenshot({ path: "test-results/combined.png", fullPage: true });
+});
