@@ -26,9 +26,14 @@ export async function presignUpload(key: string, contentType: string, sizeBytes:
 }
 
 export async function objectSize(key: string): Promise<number | null> {
+  return (await objectInfo(key))?.size ?? null;
+}
+
+/** Size and entity tag of a stored object; the tag changes whenever the object is replaced. */
+export async function objectInfo(key: string): Promise<{ size: number; etag: string } | null> {
   try {
     const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
-    return head.ContentLength ?? null;
+    return { size: head.ContentLength ?? 0, etag: head.ETag ?? "" };
   } catch (error) {
     const status = (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
     if (status === 404 || (error as Error).name === "NotFound") return null;

@@ -6,7 +6,8 @@ import { readCsv } from "@/lib/ingest/read-csv";
 import type { IngestProblem, IngestRecord } from "@/lib/ingest/types";
 import { commitVersion, type CommittedVersion } from "@/lib/observations/commit-version";
 import { currentRawValues } from "@/lib/data/observations";
-import { objectSize, presignUpload, readObject } from "@/lib/storage/objects";
+import { objectInfo, presignUpload, readObject } from "@/lib/storage/objects";
+import type { ReadCsvResult } from "@/lib/ingest/read-csv";
 import type { SessionUser } from "@/lib/auth/session";
 import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
@@ -85,12 +86,26 @@ async function loadUpload(uploadId: string): Promise<Upload> {
   return upload;
 }
 
-async function readStoredFile(upload: Upload) {
-  const size = await objectSize(upload.objectKey);
-  if (size === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
-  if (size !== Number(upload.declaredSizeBytes)) throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
+/**
+ * The last few checked files, by upload: a commit on the same server right after its check
+ * reuses the parse instead of reading the file again, when storage still holds the very
+ * same object (same entity tag) and the plots have not changed.
+ */
+const recentlyChecked = new Map<string, { etag: string; plotCount: number; result: ReadCsvResult }>();
+const RECENT_LIMIT = 4;
+
+async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
+  const info = await objectInfo(upload.objectKey);
+  if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
+  if (info.size !== Number(upload.declaredSizeBytes)) throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
   const context = await ingestContextFor(upload.trialId, upload.assessmentId);
-  return readCsv(await readObject(upload.objectKey), context);
+  const cached = recentlyChecked.get(upload.id);
+  if (cached && info.etag && cached.etag === info.etag && cached.plotCount === context.plots.length) return cached.result;
+  const result = await readCsv(await readObject(upload.objectKey), context);
+  recentlyChecked.delete(upload.id);
+  recentlyChecked.set(upload.id, { etag: info.etag, plotCount: context.plots.length, result });
+  while (recentlyChecked.size > RECENT_LIMIT) recentlyChecked.delete(recentlyChecked.keys().next().value!);
+  return result;
 }
 
 function compare(records: IngestRecord[], current: { plotNumber: number; quadrat: number; species: string; value: number }[]): ChangeSummary {
@@ -148,6 +163,7 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
     values: result.records,
     reason,
   });
+  recentlyChecked.delete(upload.id);
   await notify({ type: "upload-committed", trialId: upload.trialId, assessmentId: upload.assessmentId, versionNumber: version.number, actorId: user.id });
   return version;
 }
