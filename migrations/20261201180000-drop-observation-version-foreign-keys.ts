@@ -17,11 +17,11 @@ export async function down({ context: queryInterface }: MigrationParams): Promis
   await queryInterface.sequelize.transaction(async (transaction) => {
     await queryInterface.addConstraint("observations", {
       type: "foreign key", fields: ["added_in_version_id"], name: "observations_added_in_version_id_fkey",
-      references: { table: "dataset_versions", field: "id" }, onDelete: "CASCADE", transaction,
+      references: { table: "dataset_versions", field: "id" }, onDelete: "CASCADE", onUpdate: "NO ACTION", transaction,
     });
     await queryInterface.addConstraint("observations", {
       type: "foreign key", fields: ["replaced_in_version_id"], name: "observations_replaced_in_version_id_fkey",
-      references: { table: "dataset_versions", field: "id" }, onDelete: "CASCADE", transaction,
+      references: { table: "dataset_versions", field: "id" }, onDelete: "CASCADE", onUpdate: "NO ACTION", transaction,
     });
   });
 }
