@@ -41,7 +41,7 @@ export const notices = {
       subject: `New ${input.crop.toLowerCase()} results: ${input.trialTitle}`,
       summary: `New published results for ${input.crop}: ${input.trialTitle}.`,
       paragraphs: [`Results of the trial “${input.trialTitle}” on ${input.crop} are now published, with costs and what they mean in the field.`],
-      link: { label: "Read the results", url: absoluteUrl(`/published/${input.trialId}`) },
+      link: { label: "Read the results", url: absoluteUrl(`/library/${input.trialId}`) },
     };
   },
   assessmentDue(input: { trialId: string; trialTitle: string; assessmentId: string; assessmentName: string; plannedDate: string }): NoticeContent {

@@ -99,7 +99,7 @@ describe("notify() turns events into mail for the right people", () => {
     if (followed) {
       await deliver(rows);
       const mail = await waitForMail(mailTo(grower.email, "lettuce results"));
-      expect(mail.text).toContain(`/published/${fixture.trial.id}`);
+      expect(mail.text).toContain(`${process.env.APP_BASE_URL}/library/${fixture.trial.id}`);
     }
   });
 
