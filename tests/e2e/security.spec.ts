@@ -27,6 +27,7 @@ test("every page works under the content security policy, charts included", asyn
 
   await page.goto("/trials");
   await page.getByRole("link", { name: "Lettuce weed control: mulches, flame, cultivation and a solar weeding robot", exact: true }).click();
+  await expect(page).toHaveURL(/\/trials\/[0-9a-f-]{36}$/);
   const trialUrl = page.url();
   for (const path of ["", "/map", "/labels", "/data", "/results", "/report", "/audit"]) {
     await page.goto(`${trialUrl}${path}`);
