@@ -3,6 +3,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { signInSchema } from "@/lib/validations/auth";
 import { findUserForSignIn } from "@/lib/data/users";
 import { verifyPassword } from "./password";
+import { assertSignInAllowed, clientAddressOf, recordFailedSignIn } from "./sign-in-throttle";
 
 // A hash of a random password, so an unknown e-mail costs as much time as a wrong password.
 const DUMMY_HASH = "$2b$10$CwTycUXWue0Thq9StjUM0uJ8.pkaSIuiuUe0yzDxdxYZBnNVvyVwe";
@@ -16,12 +17,17 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      async authorize(credentials) {
+      async authorize(credentials, request) {
         const parsed = signInSchema.safeParse(credentials);
         if (!parsed.success) return null;
+        const clientAddress = clientAddressOf(request?.headers);
+        await assertSignInAllowed(parsed.data.email, clientAddress);
         const user = await findUserForSignIn(parsed.data.email);
         const passwordMatches = await verifyPassword(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
-        if (!user || !user.active || !passwordMatches) return null;
+        if (!user || !user.active || !passwordMatches) {
+          await recordFailedSignIn(parsed.data.email, clientAddress);
+          return null;
+        }
         return { id: user.id, email: user.email, name: user.name, role: user.role };
       },
     }),

@@ -6,6 +6,9 @@ export class TestClient {
   private cookies = new Map<string, string>();
   readonly baseUrl = testEnvironment().baseUrl;
 
+  /** extraHeaders go with every request (a client address behind a proxy, say). */
+  constructor(private readonly extraHeaders: Record<string, string> = {}) {}
+
   private remember(response: Response): void {
     for (const header of response.headers.getSetCookie()) {
       const [pair] = header.split(";");
@@ -24,6 +27,7 @@ export class TestClient {
       redirect: "manual",
       ...rest,
       headers: {
+        ...this.extraHeaders,
         cookie: this.cookieHeader(),
         ...(json !== undefined ? { "content-type": "application/json" } : {}),
         ...rest.headers,
@@ -34,14 +38,18 @@ export class TestClient {
     return response;
   }
 
+  /** The last sign-in answer's body (next-auth names an error code in it). */
+  lastSignInBody = "";
+
   async signIn(email: string, password = DEMO_PASSWORD): Promise<boolean> {
     const csrf = await this.request("/api/auth/csrf");
     const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-    await this.request("/api/auth/callback/credentials", {
+    const answer = await this.request("/api/auth/callback/credentials", {
       method: "POST",
       headers: { "content-type": "application/x-www-form-urlencoded" },
       body: new URLSearchParams({ csrfToken, email, password, json: "true" }).toString(),
     });
+    this.lastSignInBody = `${answer.headers.get("location") ?? ""} ${await answer.text()}`;
     return [...this.cookies.keys()].some((name) => name.endsWith("next-auth.session-token"));
   }
 }

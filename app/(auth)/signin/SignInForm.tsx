@@ -28,7 +28,11 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     const result = await signIn("credentials", { ...parsed.data, redirect: false });
     setBusy(false);
     if (!result || result.error) {
-      setError(result?.status === 429 ? "Too many attempts. Wait a minute and try again." : "That e-mail and password do not match an account.");
+      setError(
+        result?.error === "TooManyAttempts"
+          ? "Too many failed attempts. Wait 15 minutes and try again, or reset your password."
+          : "That e-mail and password do not match an account.",
+      );
       return;
     }
     router.replace(callbackUrl);
