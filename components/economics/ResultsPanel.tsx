@@ -125,7 +125,7 @@ export function ResultsPanel({ numbers }: { numbers: SummaryNumbers }) {
                 <td className="px-3 py-2 text-right tabular-nums">{perArea(row.cost.equipmentCostPerHa)}</td>
                 <td className="px-3 py-2 text-right font-medium tabular-nums">{perArea(row.cost.totalPerHa)}</td>
                 <td className="px-3 py-2 text-right tabular-nums">
-                  {row.costPerPercentControl !== null ? `${currency}${number(areaAmount(row.costPerPercentControl, system), 2)}` : "—"}
+                  {row.costPerPercentControl !== null && !(row.cost.missing.length > 0 && row.cost.totalPerHa === 0) ? `${currency}${number(areaAmount(row.costPerPercentControl, system), 2)}` : "—"}
                 </td>
               </tr>
             ))}

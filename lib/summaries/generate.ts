@@ -129,6 +129,7 @@ function costsSection(input: SummaryInput): SummarySection | null {
     heading: "Cost and labour",
     paragraphs: [
       ...costs.map(({ method, cost }) => {
+        if (cost!.incomplete && cost!.totalPerHa === 0) return `The trial did not record what ${method.name.toLowerCase()} cost.`;
         const incomplete = cost!.incomplete ? " Some costs were not recorded, so the full cost is higher." : "";
         return `${method.name} cost about ${moneyPerAreaBoth(cost!.totalPerHa, input.currency)} for the season, including ${hoursPerAreaBoth(cost!.labourHoursPerHa)} of labour.${incomplete}`;
       }),

@@ -60,6 +60,7 @@ test("an unpublished trial's library address is not found, for visitors and for 
   await signIn(page, "researcher2@hoebench.test");
   await page.goto("/trials");
   await page.getByRole("link", { name: "Carrot pre-emergence flaming timing" }).click();
+  await page.waitForURL(/\/trials\/[0-9a-f-]{36}/);
   const trialId = page.url().split("/trials/")[1].split(/[/?#]/)[0];
   for (const signedIn of [true, false]) {
     if (!signedIn) await page.context().clearCookies();

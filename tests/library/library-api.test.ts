@@ -107,8 +107,8 @@ describe("editing and publishing a summary", () => {
     expect(record.generatedText).toBe(generated);
     const numbers = record.numbers as { input: { weeds: { checkCode: string; results: Array<{ code: string; percentControl: number }> } } };
     expect(numbers.input.weeds.checkCode).toBe("T1");
-    // T2 averages 5 + 0.5 plants per quadrat against 46 + 0.5 in the weedy check: 100 × (1 − 5.5/46.5)
-    expect(numbers.input.weeds.results.find((result) => result.code === "T2")!.percentControl).toBeCloseTo(100 * (1 - 5.5 / 46.5), 9);
+    // T2 averages (4+6+5+3)/4 + 0.5 = 5 plants per quadrat against (40+48+44+52)/4 + 0.5 = 46.5 in the weedy check: 100 × (1 − 5/46.5)
+    expect(numbers.input.weeds.results.find((result) => result.code === "T2")!.percentControl).toBeCloseTo(100 * (1 - 5 / 46.5), 9);
 
     const page = await (await new TestClient().request(`/library/${locked.trial.id}`)).text();
     expect(page).toContain("the mulch plots dried out in June");

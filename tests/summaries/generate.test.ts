@@ -127,6 +127,12 @@ describe("plain-language summary wording", () => {
     expect(summary.text).toContain("Labour is costed at $18 an hour");
   });
 
+  it("a method with no recorded costs says so instead of costing nothing", () => {
+    const summary = generateSummary(input({ costs: [{ code: "HH", totalPerHa: 0, labourHoursPerHa: 0, incomplete: true }] }));
+    expect(summary.text).toContain("The trial did not record what hand hoeing cost.");
+    expect(summary.text).not.toContain("$0 per acre");
+  });
+
   it("thermal, chemical and machinery methods carry the cautions and who governs", () => {
     const summary = generateSummary(input());
     expect(summary.text).toContain("Flame weeding carries safety risks; read the cautions below. The product label and local regulations govern, not this summary.");
