@@ -1,5 +1,6 @@
 import { writeFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
+import pg from "pg";
 
 const PASSWORD = "hoebench-demo";
 const TITLE = "Lettuce weed control: mulches, flame, cultivation and a solar weeding robot (second site)";
@@ -13,6 +14,22 @@ async function signIn(page: Page, email: string) {
   await expect(page).not.toHaveURL(/signin/);
 }
 
+let lockedTrialId: string | null = null;
+
+// The demo's second lettuce site is put back as it was (active, never reviewed), so other browser tests see the demo unchanged.
+test.afterAll(async () => {
+  if (!lockedTrialId || !process.env.DATABASE_URL) return;
+  const client = new pg.Client({ connectionString: process.env.DATABASE_URL });
+  await client.connect();
+  try {
+    await client.query("DELETE FROM review_comments WHERE trial_id = $1", [lockedTrialId]);
+    await client.query("DELETE FROM review_requests WHERE trial_id = $1", [lockedTrialId]);
+    await client.query("UPDATE trials SET status = 'active' WHERE id = $1", [lockedTrialId]);
+  } finally {
+    await client.end();
+  }
+});
+
 test("researcher asks for review, reviewer comments and approves, the trial locks and edits need a reason", async ({ page }) => {
   test.setTimeout(180_000);
   await signIn(page, "researcher@hoebench.test");
@@ -20,6 +37,7 @@ test("researcher asks for review, reviewer comments and approves, the trial lock
   await page.getByRole("link", { name: TITLE, exact: true }).click();
   await expect(page).toHaveURL(/\/trials\/[0-9a-f-]{36}$/);
   const trialId = page.url().split("/trials/")[1];
+  lockedTrialId = trialId;
   await page.goto(`/trials/${trialId}/review`);
   await page.getByLabel("Message to the reviewers (optional)").fill("All five assessments are in.");
   await page.getByRole("button", { name: "Request review" }).click();
