@@ -24,7 +24,8 @@ export function MeansTable({ results }: { results: AssessmentResults }) {
   }
   return (
     <div data-testid="means-table">
-      <DataTable rows={results.means} columns={columns} rowKey={(row) => row.treatment} caption="Treatment means" />
+      {/* Remounted when the column set changes (a transform or control added), so the table never keeps a stale column model. */}
+      <DataTable key={columns.map((column) => column.id).join(",")} rows={results.means} columns={columns} rowKey={(row) => row.treatment} caption="Treatment means" />
       <p className="mt-2 text-xs text-soil-700" data-testid="letters-note">
         {results.lettersNote} SE: standard error of the {results.lsd === null ? "least-squares " : ""}mean{transformed ? " on the transformed scale" : ""}.
         {results.means.some((row) => row.percentControl !== null) ? ` Percent control = 100 × (1 − treatment mean / ${results.options.control} mean), from untransformed means.` : ""}

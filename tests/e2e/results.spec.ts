@@ -35,6 +35,7 @@ test("a researcher reads an assessment's tables, letters and charts and changes 
   await expect(page.getByTestId("letters-note")).toContainText("Tukey's HSD");
   await page.getByLabel("Transform").selectOption("sqrt");
   await expect(page.getByTestId("means-table")).toContainText("Transformed mean");
+  await expect(page.getByTestId("means-table")).toContainText("% control (vs WC)");
   await page.getByLabel("Equivalence reference").selectOption("HH");
   await page.getByLabel("Margin (±)").fill("1.5");
   await expect(page.getByTestId("equivalence")).toContainText("90% interval");
