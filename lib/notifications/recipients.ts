@@ -1,8 +1,8 @@
 import "server-only";
-import { Op, QueryTypes } from "sequelize";
+import { Op } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import type { MembershipRole } from "@/lib/trials/vocabulary";
-import { Membership, Trial, User } from "@/models";
+import { Follow, Membership, Treatment, Trial, User } from "@/models";
 import type { Recipient } from "./deliver";
 
 function toRecipient(user: User): Recipient {
@@ -25,19 +25,21 @@ export async function teamIds(trialId: string, roles: MembershipRole[]): Promise
 }
 
 /**
- * People who follow the trial's crop or one of its methods (the follow feature's `follows`
- * table: crops in lower case, methods by category). Until that table exists in a database,
- * a publication notifies no one.
+ * People who follow the trial's crop or one of its methods (the follow feature stores crops
+ * in lower case and methods by their category, so matching is exact).
  */
 export async function followersOf(trial: Trial): Promise<string[]> {
-  const sequelize = db();
-  const [table] = await sequelize.query<{ present: boolean }>(`SELECT to_regclass('follows') IS NOT NULL AS present`, { type: QueryTypes.SELECT });
-  if (!table?.present) return [];
-  const rows = await sequelize.query<{ user_id: string }>(
-    `SELECT DISTINCT user_id FROM follows
-     WHERE (kind = 'crop' AND value = lower(:crop))
-        OR (kind = 'method' AND value IN (SELECT category FROM treatments WHERE trial_id = :trialId AND category <> 'check'))`,
-    { type: QueryTypes.SELECT, replacements: { crop: trial.crop.trim(), trialId: trial.id } },
-  );
-  return rows.map((row) => row.user_id);
+  db();
+  const treatments = await Treatment.findAll({ where: { trialId: trial.id }, attributes: ["category"] });
+  const methods = [...new Set(treatments.map((treatment) => treatment.category))].filter((category) => category !== "check");
+  const follows = await Follow.findAll({
+    where: {
+      [Op.or]: [
+        { kind: "crop", value: trial.crop.trim().toLowerCase() },
+        ...(methods.length ? [{ kind: "method" as const, value: { [Op.in]: methods } }] : []),
+      ],
+    },
+    attributes: ["userId"],
+  });
+  return follows.map((follow) => follow.userId);
 }

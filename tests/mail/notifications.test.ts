@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Op, QueryTypes } from "sequelize";
+import { Op } from "sequelize";
 import { processMailQueueOnce } from "@/lib/mail/queue";
 import { sendAssessmentDueReminders } from "@/lib/notifications/assessment-due";
 import { sendDailyDigests } from "@/lib/notifications/digest";
 import { notify } from "@/lib/notifications/notify";
 import { saveNotificationPreferences } from "@/lib/notifications/settings";
-import { MailMessage, Membership, NotificationDigestItem, type User } from "@/models";
+import { Follow, MailMessage, Membership, NotificationDigestItem, type User } from "@/models";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
 import { createPerson, removePeople } from "./people";
@@ -25,9 +25,6 @@ async function queuedSince(since: Date, subjectPart: string): Promise<MailMessag
 async function deliver(rows: MailMessage[]): Promise<void> {
   await processMailQueueOnce({ ids: rows.map((row) => row.id) });
 }
-
-const followsTable = async () =>
-  (await testDatabase().query<{ present: boolean }>(`SELECT to_regclass('follows') IS NOT NULL AS present`, { type: QueryTypes.SELECT }))[0].present;
 
 beforeAll(async () => {
   testDatabase();
@@ -85,22 +82,19 @@ describe("notify() turns events into mail for the right people", () => {
     await waitForMail(mailTo(technician.email, "Approved"));
   });
 
-  it("trial published → people following the crop", async () => {
+  it("trial published → people following the crop or one of its methods, once each", async () => {
     const since = new Date();
-    const followed = await followsTable();
-    if (followed) {
-      await testDatabase().query(`INSERT INTO follows (id, user_id, kind, value, created_at) VALUES (gen_random_uuid(), :userId, 'crop', 'lettuce', now())`, {
-        replacements: { userId: grower.id },
-      });
-    }
+    const methodFollower = await createPerson("grower", "handweeder");
+    await Follow.create({ userId: grower.id, kind: "crop", value: "lettuce" });
+    await Follow.create({ userId: grower.id, kind: "method", value: "hand" });
+    await Follow.create({ userId: methodFollower.id, kind: "method", value: "hand" });
+    await Follow.create({ userId: owner.id, kind: "crop", value: "onion" });
     await notify({ type: "trial-published", trialId: fixture.trial.id, actorId: owner.id });
     const rows = await queuedSince(since, trialTitle());
-    expect(rows.map((row) => row.toAddress)).toEqual(followed ? [grower.email] : []);
-    if (followed) {
-      await deliver(rows);
-      const mail = await waitForMail(mailTo(grower.email, "lettuce results"));
-      expect(mail.text).toContain(`${process.env.APP_BASE_URL}/library/${fixture.trial.id}`);
-    }
+    expect(rows.map((row) => row.toAddress).sort()).toEqual([grower.email, methodFollower.email].sort());
+    await deliver(rows);
+    const mail = await waitForMail(mailTo(grower.email, "lettuce results"));
+    expect(mail.text).toContain(`${process.env.APP_BASE_URL}/library/${fixture.trial.id}`);
   });
 
   it("assessment due tomorrow → the technicians and the owner, from the daily job", async () => {
