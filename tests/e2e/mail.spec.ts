@@ -144,6 +144,10 @@ test("a researcher invites a technician by e-mail; the technician joins from the
   const frame = admin.frameLocator(`iframe[title="Mail: ${invitation.subject}"]`).first();
   await expect(frame.getByRole("link", { name: "Accept the invitation" })).toHaveAttribute("href", inviteLink);
   await admin.screenshot({ path: `${shots}/mail-07-caught-mail.png` });
+  // Links in the sandboxed preview open in a new tab, where the used invitation says so.
+  const [opened] = await Promise.all([admin.context().waitForEvent("page"), frame.getByRole("link", { name: "Accept the invitation" }).click()]);
+  await expect(opened.getByTestId("link-problem")).toContainText("already been used");
+  await opened.close();
   await admin.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Mail queue" }).click();
   await expect(admin.getByTestId("queued-mail").filter({ hasText: invitee }).first()).toContainText("sent");
   await admin.screenshot({ path: `${shots}/mail-08-mail-queue.png`, fullPage: true });
