@@ -6,7 +6,7 @@ import { MeansTable } from "./MeansTable";
 import { BoxChart, EquivalenceChart, MeansChart, QqChart, ResidualChart } from "@/components/charts/ResultCharts";
 import { callApi, type ApiFailure } from "@/lib/client/api";
 import { transformLabels, transforms, type AssessmentResults } from "@/lib/validations/analysis";
-import { num, pValue } from "./format";
+import { num, pText } from "./format";
 
 export interface ResultsOptionsState {
   transform: (typeof transforms)[number];

@@ -24,3 +24,9 @@ export const sourceLabels: Record<string, string> = {
   "block(site)": "Block within site",
   "site:treatment": "Site × treatment",
 };
+
+/** "p = 0.0123" or "p < 0.0001", for sentences. */
+export function pText(p: number | null | undefined): string {
+  const text = pValue(p);
+  return text.startsWith("<") ? `p ${text.replace("<", "< ")}` : `p = ${text || "–"}`;
+}

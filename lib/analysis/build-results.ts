@@ -119,6 +119,7 @@ export function buildResults(input: ResultsInput): AssessmentResults {
     if (values.every((value) => value === 0)) warnings.push(`Every plot of ${code} (${names.get(code) ?? code}) is zero: its variance is zero, which breaks the equal-variance assumption; read its letters with care or analyse a transform.`);
   }
   let control = options.control;
+  if (!isWeedVariable(assessment.variable)) control = undefined;
   if (control !== undefined && !(rawMean(control) > 0)) {
     warnings.push(`Percent control is not shown: ${control} is not a treatment here or its mean is zero.`);
     control = undefined;

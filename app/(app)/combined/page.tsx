@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { AnovaTable } from "@/components/results/AnovaTable";
-import { num, pValue } from "@/components/results/format";
+import { num, pText } from "@/components/results/format";
 import { combinedAnalysis, combinedGroups } from "@/lib/analysis/combined";
 import { can } from "@/lib/auth/permissions";
 import { currentUser } from "@/lib/auth/session";
@@ -45,7 +45,7 @@ export default async function CombinedPage({ searchParams }: { searchParams: Pro
           {result.error && <p role="alert" className="rounded border border-red-300 bg-red-50 p-3 text-sm">{result.error}</p>}
           {result.siteByTreatment && (
             <p className="text-sm" data-testid="site-by-treatment">
-              Site × treatment: F = {num(result.siteByTreatment.f)}, p = {pValue(result.siteByTreatment.p)}.{" "}
+              Site × treatment: F = {num(result.siteByTreatment.f)}, {pText(result.siteByTreatment.p)}.{" "}
               {result.siteByTreatment.p <= 0.05 ? "The treatments ranked differently between sites: read the per-site means before the combined ones." : "No evidence that the treatments ranked differently between sites; the combined means summarise both."}
             </p>
           )}

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { CommentThreads, type CommentItem } from "@/components/review/CommentThreads";
 import { ReviewActions } from "@/components/review/ReviewActions";
-import { pValue, num } from "@/components/results/format";
+import { num, pText } from "@/components/results/format";
 import { TrialHeading } from "@/components/trials/TrialHeading";
 import { TrialTabs } from "@/components/trials/TrialTabs";
 import { assessmentResults, defaultControl, treatmentsOf } from "@/lib/analysis/assessment-results";
@@ -70,7 +70,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ trialId
               <p className="text-sm text-soil-700">No data yet.</p>
             ) : (
               <p className="text-sm">
-                Treatment F = {num(results.treatmentTest?.f)}, p = {pValue(results.treatmentTest?.p)} · CV {num(results.cvPercent)}% · data version {results.dataVersion} ·{" "}
+                Treatment F = {num(results.treatmentTest?.f)}, {pText(results.treatmentTest?.p)} · CV {num(results.cvPercent)}% · data version {results.dataVersion} ·{" "}
                 <Link href={`/trials/${trial.id}/results/${assessment.id}`} className="text-leaf-700 underline">Full results</Link>
               </p>
             )}
