@@ -157,10 +157,10 @@ function ResultsBody({ results }: { results: AssessmentResults }) {
             <QqChart results={results} />
             <div className="rounded border border-soil-200 bg-white p-3 text-sm" data-testid="assumptions">
               <p>
-                Shapiro-Wilk (residuals): {results.diagnostics.shapiroWilk ? `W = ${num(results.diagnostics.shapiroWilk.w, 4)}, p = ${pValue(results.diagnostics.shapiroWilk.p)}` : "not computed"}
+                Shapiro-Wilk (residuals): {results.diagnostics.shapiroWilk ? `W = ${num(results.diagnostics.shapiroWilk.w, 4)}, ${pText(results.diagnostics.shapiroWilk.p)}` : "not computed"}
               </p>
               <p>
-                Levene (Brown-Forsythe): {results.diagnostics.levene ? `F = ${num(results.diagnostics.levene.f)}, p = ${pValue(results.diagnostics.levene.p)}` : "not computed"}
+                Levene (Brown-Forsythe): {results.diagnostics.levene ? `F = ${num(results.diagnostics.levene.f)}, ${pText(results.diagnostics.levene.p)}` : "not computed"}
               </p>
               <p className="mt-2 font-medium">Recommendation</p>
               <ul className="ml-5 list-disc">
