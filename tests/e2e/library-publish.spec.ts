@@ -27,10 +27,8 @@ test.beforeAll(async () => {
   await fixture.trial.update({ status: "locked" });
 });
 
-test.afterAll(async () => {
-  await removeTrialFixtures();
-  await testDatabase().close();
-});
+// The connection stays open: browser specs share one worker process and its database connection.
+test.afterAll(removeTrialFixtures);
 
 test("a researcher edits the generated summary of a locked trial and publishes it; visitors read the edited text", async ({ page }) => {
   const url = `/library/${fixture.trial.id}`;
