@@ -108,19 +108,23 @@ export async function trialReportPdf(report: TrialReport, options: { compress?: 
     paragraph(doc, `CV = ${num(results.cvPercent)}% · grand mean = ${num(results.grandMean)}${transformed ? " (transformed)" : ` ${results.assessment.unit}`} · LSD (${results.options.alpha}) = ${results.lsd === null ? "not given (unbalanced)" : num(results.lsd)}`, 8.5);
     doc.moveDown(0.4);
     const hasControl = results.means.some((mean) => mean.percentControl !== null);
-    table(
-      doc,
-      ["Treatment", "n", `Mean (${results.assessment.unit})`, transformed ? "Transformed" : "", "SE", "Group", hasControl ? "% control" : ""],
-      results.means.map((mean) => [`${mean.treatment} ${mean.name}`, String(mean.n), num(mean.mean), transformed ? num(mean.transformedMean) : "", num(mean.se), mean.letters ?? "–", mean.percentControl === null ? "" : num(mean.percentControl)]),
-      [170, 30, 80, 70, 50, 50, 60],
-      ["left", "right", "right", "right", "right", "left", "right"],
-    );
+    // Only the columns that apply: transformed means and percent control appear when used.
+    const columns: Array<{ header: string; width: number; align: "left" | "right"; cell: (mean: (typeof results.means)[number]) => string }> = [
+      { header: "Treatment", width: 170, align: "left", cell: (mean) => `${mean.treatment} ${mean.name}` },
+      { header: "n", width: 30, align: "right", cell: (mean) => String(mean.n) },
+      { header: `Mean (${results.assessment.unit})`, width: 80, align: "right", cell: (mean) => num(mean.mean) },
+      ...(transformed ? [{ header: "Transformed", width: 70, align: "right" as const, cell: (mean: (typeof results.means)[number]) => num(mean.transformedMean) }] : []),
+      { header: "SE", width: 50, align: "right", cell: (mean) => num(mean.se) },
+      { header: "Group", width: 50, align: "left", cell: (mean) => mean.letters ?? "–" },
+      ...(hasControl ? [{ header: "% control", width: 60, align: "right" as const, cell: (mean: (typeof results.means)[number]) => (mean.percentControl === null ? "–" : num(mean.percentControl)) }] : []),
+    ];
+    table(doc, columns.map((column) => column.header), results.means.map((mean) => columns.map((column) => column.cell(mean))), columns.map((column) => column.width), columns.map((column) => column.align));
     paragraph(doc, results.lettersNote, 8);
     doc.moveDown(0.4);
     const chart = meansChartSvg(results);
     if (doc.y + 220 > doc.page.height - margin) doc.addPage();
     SVGtoPDF(doc, chart, margin, doc.y, { width: 440, height: 220, assumePt: true, fontCallback: (_family, bold) => (bold ? "Helvetica-Bold" : "Helvetica") });
-    doc.y += 226;
+    doc.y += 236;
     if (results.diagnostics.shapiroWilk || results.diagnostics.levene) {
       paragraph(doc, `Shapiro-Wilk W = ${num(results.diagnostics.shapiroWilk?.w, 4)}, p = ${pValue(results.diagnostics.shapiroWilk?.p)}; Levene (Brown-Forsythe) F = ${num(results.diagnostics.levene?.f)}, p = ${pValue(results.diagnostics.levene?.p)}. ${results.diagnostics.advice.join(" ")}`, 8);
     }
