@@ -39,6 +39,13 @@ async function readJson(request: NextRequest): Promise<unknown> {
   }
 }
 
+/** A route that takes no body says so rather than ignoring whatever was sent. */
+async function refuseBody<B>(request: NextRequest): Promise<B> {
+  const text = (await request.text()).trim();
+  if (text !== "" && text !== "{}") throw new AppError("INVALID_INPUT", "This request takes no body.");
+  return undefined as B;
+}
+
 function validate<S extends Schema | undefined>(schema: S, value: unknown, what: string): Parsed<S> {
   if (!schema) return undefined as Parsed<S>;
   const parsed = schema.safeParse(value);
@@ -60,7 +67,7 @@ export function route<P extends Schema | undefined = undefined, Q extends Schema
       if (!user) throw new AppError("UNAUTHENTICATED", "Please sign in to continue.");
       const params = validate<P>(spec.params as P, await segment?.params, "address");
       const query = validate<Q>(spec.query as Q, Object.fromEntries(request.nextUrl.searchParams), "query");
-      const body = validate<B>(spec.body as B, spec.body ? await readJson(request) : undefined, "request");
+      const body = spec.body ? validate<B>(spec.body as B, await readJson(request), "request") : await refuseBody<Parsed<B>>(request);
       const trialId = await spec.trialId?.({ params, query, body });
       const trial = await authorize(user, spec.permission, trialId);
       return await handle({ request, user, params, query, body, trial });
@@ -109,7 +116,7 @@ export function publicRoute<P extends Schema | undefined = undefined, Q extends 
     try {
       const params = validate<P>(spec.params as P, await segment?.params, "address");
       const query = validate<Q>(spec.query as Q, Object.fromEntries(request.nextUrl.searchParams), "query");
-      const body = validate<B>(spec.body as B, spec.body ? await readJson(request) : undefined, "request");
+      const body = spec.body ? validate<B>(spec.body as B, await readJson(request), "request") : await refuseBody<Parsed<B>>(request);
       return await handle({ request, params, query, body });
     } catch (error) {
       return errorResponse(error);
