@@ -90,14 +90,15 @@ describe("editing and publishing a summary", () => {
     expect((await researcher.request(`/api/summaries/${locked.trial.id}`, { method: "PUT", json: { text: "" } })).status).toBe(422);
 
     // Outside the trial, a grower or another researcher learns nothing of it: 404, as for any trial they cannot see.
-    expect((await (await signedInAs("grower@hoebench.test")).request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST" })).status).toBe(404);
-    expect((await (await signedInAs("researcher2@hoebench.test")).request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST" })).status).toBe(404);
-    expect((await new TestClient().request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST" })).status).toBe(401);
-    expect((await researcher.request(`/api/summaries/${draft.trial.id}/publish`, { method: "POST" })).status).toBe(409);
+    expect((await (await signedInAs("grower@hoebench.test")).request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST", json: {} })).status).toBe(404);
+    expect((await (await signedInAs("researcher2@hoebench.test")).request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST", json: {} })).status).toBe(404);
+    expect((await new TestClient().request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST", json: {} })).status).toBe(401);
+    expect((await researcher.request(`/api/summaries/${draft.trial.id}/publish`, { method: "POST", json: {} })).status).toBe(409);
+    expect((await researcher.request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST", json: [] })).status).toBe(422);
 
-    const published = await researcher.request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST" });
+    const published = await researcher.request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST", json: {} });
     expect(published.status).toBe(200);
-    expect((await researcher.request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST" })).status).toBe(409);
+    expect((await researcher.request(`/api/summaries/${locked.trial.id}/publish`, { method: "POST", json: {} })).status).toBe(409);
     expect((await researcher.request(`/api/summaries/${locked.trial.id}`, { method: "PUT", json: { text: "changed" } })).status).toBe(409);
 
     await locked.trial.reload();

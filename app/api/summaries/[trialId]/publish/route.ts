@@ -7,7 +7,10 @@ import { trialIdParams } from "@/lib/validations/common";
 export const dynamic = "force-dynamic";
 
 /** Locked → published, storing the summary text and the numbers behind it (409 unless locked). */
-export const POST = route({ permission: "trial:publish", params: trialIdParams, trialId: ({ params }) => params.trialId }, async ({ user, params }) => {
+// The body carries nothing, and anything else in it is refused before the trial is touched.
+const publishBody = z.object({}).strict();
+
+export const POST = route({ permission: "trial:publish", params: trialIdParams, body: publishBody, trialId: ({ params }) => params.trialId }, async ({ user, params }) => {
   const { publishedAt } = await publishTrial(user, params.trialId);
   return jsonResponse(z.object({ trialId: z.string(), status: z.literal("published"), publishedAt: z.date(), libraryUrl: z.string() }), {
     trialId: params.trialId,
