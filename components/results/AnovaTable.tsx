@@ -4,7 +4,7 @@ import { num, pValue, sourceLabels } from "./format";
 type Row = AssessmentResults["anova"][number];
 
 /** The analysis of variance as published: source, df, SS, MS, F, Pr > F, then CV, grand mean and LSD. */
-export function AnovaTable({ anova, cvPercent, grandMean, lsd, alpha, unit, transformed }: { anova: Row[]; cvPercent: number | null; grandMean: number | null; lsd: number | null; alpha: number; unit: string; transformed: boolean }) {
+export function AnovaTable({ anova, cvPercent, grandMean, lsd, alpha, unit, transformed, summary = true }: { anova: Row[]; cvPercent: number | null; grandMean: number | null; lsd: number | null; alpha: number; unit: string; transformed: boolean; summary?: boolean }) {
   const total = anova.reduce((sum, row) => ({ df: sum.df + row.df, ss: sum.ss + row.ss }), { df: 0, ss: 0 });
   return (
     <div className="overflow-x-auto rounded border border-soil-200 bg-white">
@@ -38,6 +38,7 @@ export function AnovaTable({ anova, cvPercent, grandMean, lsd, alpha, unit, tran
             <td colSpan={3} />
           </tr>
         </tbody>
+        {summary && (
         <tfoot className="border-t border-soil-900 text-soil-700">
           <tr>
             <td colSpan={6} className="px-3 py-1.5">
@@ -46,6 +47,7 @@ export function AnovaTable({ anova, cvPercent, grandMean, lsd, alpha, unit, tran
             </td>
           </tr>
         </tfoot>
+        )}
       </table>
     </div>
   );

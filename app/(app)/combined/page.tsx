@@ -52,7 +52,7 @@ export default async function CombinedPage({ searchParams }: { searchParams: Pro
           {[...result.warnings, ...result.advice].length > 0 && (
             <ul className="ml-5 list-disc text-sm text-amber-900">{[...result.warnings, ...result.advice].map((line) => <li key={line}>{line}</li>)}</ul>
           )}
-          {result.anova.length > 0 && <AnovaTable anova={result.anova} cvPercent={null} grandMean={null} lsd={null} alpha={0.05} unit={result.unit} transformed={false} />}
+          {result.anova.length > 0 && <AnovaTable anova={result.anova} cvPercent={null} grandMean={null} lsd={null} alpha={0.05} unit={result.unit} transformed={false} summary={false} />}
           <div className="overflow-x-auto rounded border border-soil-200 bg-white">
             <table className="w-full text-sm">
               <caption className="px-3 py-2 text-left font-medium">Means per site and combined ({result.unit}); letters: Tukey HSD, α = 0.05</caption>
