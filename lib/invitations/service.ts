@@ -144,6 +144,7 @@ export async function acceptInvitation(
       throw new AppError("FORBIDDEN", `This invitation is for ${invitation.email}, but you are signed in as ${sessionUser.email}. Sign out and open the link again.`);
     }
     user = await User.findByPk(sessionUser.id);
+    if (!user || !user.active) throw new AppError("UNAUTHENTICATED", "Your session no longer matches an active account. Sign in again.");
   } else if (view.accountExists) {
     throw new AppError("UNAUTHENTICATED", `An account for ${invitation.email} exists. Sign in with it to accept the invitation.`);
   } else if (!newAccount.name || !newAccount.password) {

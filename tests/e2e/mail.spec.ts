@@ -1,8 +1,9 @@
 import { expect, test, type Browser, type Page } from "@playwright/test";
-import { Op } from "sequelize";
+import { Op, type Sequelize } from "sequelize";
 import { Invitation, User } from "@/models";
-import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
-import { testDatabase } from "../support/database";
+import { createTrialFixture, type TrialFixture } from "../factories/trials";
+import { createSequelize } from "@/lib/db/sequelize";
+import { testEnvironment } from "../support/environment";
 
 const DEMO_PASSWORD = "hoebench-demo";
 const shots = `${process.env.HOEBENCH_TEST_SLOT ? `test-results-${process.env.HOEBENCH_TEST_SLOT}` : "test-results"}`;
@@ -50,17 +51,19 @@ function densityFile(fixture: TrialFixture): string {
 }
 
 let fixture: TrialFixture;
+let sequelize: Sequelize;
 const invitee = `nadia-${Date.now().toString(36)}@example.test`;
 
 test.beforeAll(async () => {
-  testDatabase();
+  // Its own connection, bound to the models: other specs in this worker may close the shared one.
+  sequelize = createSequelize(testEnvironment().databaseUrl, 2);
   fixture = await createTrialFixture({ ownerEmail: "researcher@hoebench.test" });
 });
 
 test.afterAll(async () => {
-  testDatabase();
   await Invitation.destroy({ where: { trialId: fixture.trial.id } });
-  await removeTrialFixtures();
+  await sequelize.query("DELETE FROM trials WHERE id = :id", { replacements: { id: fixture.trial.id } });
+  await sequelize.query("DELETE FROM sites WHERE id = :id", { replacements: { id: fixture.trial.siteId } });
   await User.destroy({ where: { email: { [Op.in]: [invitee] } } });
 });
 
