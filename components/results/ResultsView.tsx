@@ -138,7 +138,7 @@ function ResultsBody({ results }: { results: AssessmentResults }) {
         </div>
       )}
       {results.anova.length > 0 && (
-        <section className="grid items-start gap-6 lg:grid-cols-2 [&>*]:min-w-0">
+        <section className="grid items-start gap-6 2xl:grid-cols-2 [&>*]:min-w-0">
           <AnovaTable anova={results.anova} cvPercent={results.cvPercent} grandMean={results.grandMean} lsd={results.lsd} alpha={results.options.alpha} unit={results.assessment.unit} transformed={transformed} />
           <MeansTable results={results} />
         </section>
