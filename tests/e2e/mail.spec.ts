@@ -120,6 +120,7 @@ test("a researcher invites a technician by e-mail; the technician joins from the
   const reset = await freshPage(browser);
   await reset.goto("/signin");
   await reset.getByRole("link", { name: "Forgot password?" }).click();
+  await expect(reset.getByRole("heading", { name: "Forgot your password?" })).toBeVisible();
   await reset.getByLabel("E-mail").fill(invitee);
   await reset.getByRole("button", { name: "Send me a link" }).click();
   await expect(reset.getByTestId("reset-requested")).toContainText("If an account exists for that address");
