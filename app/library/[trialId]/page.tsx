@@ -53,9 +53,9 @@ export default async function PublishedTrialPage({ params }: { params: Promise<{
                 </a>
               </li>
               <li>
-                <Link href={`/trials/${trial.id}/report`} className="text-leaf-700 underline">
-                  Technical report
-                </Link>{" "}
+                <a href={`/api/library/${trial.id}/report`} className="text-leaf-700 underline" download>
+                  Technical report (PDF)
+                </a>{" "}
                 <span className="text-soil-700">(statistics tables for advisers and researchers)</span>
               </li>
             </ul>
