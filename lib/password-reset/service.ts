@@ -8,7 +8,7 @@ import { queueMail } from "@/lib/mail/queue";
 import { hashLinkToken, newLinkToken } from "@/lib/mail/tokens";
 import { PasswordResetToken, User } from "@/models";
 import { passwordResetMail } from "./mail";
-import { hashedBucket, recordAttempt } from "./rate-limit";
+import { hashedBucket, recordAttempt } from "@/lib/rate-limit";
 
 export const RESET_LIFETIME_MS = 60 * 60 * 1000;
 export const resetLimits = { perAddress: 3, perClient: 20, windowMs: 60 * 60 * 1000 } as const;
