@@ -144,15 +144,17 @@ test("a researcher invites a technician by e-mail; the technician joins from the
   // An admin sees all of it in the caught mail (as HTML, links clickable) and the queue.
   const admin = await freshPage(browser);
   await signIn(admin, "admin@hoebench.test");
-  await admin.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Caught mail" }).click();
+  await expect(admin.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Caught mail" })).toBeVisible();
+  await admin.goto("/admin/mail");
+  await expect(admin.getByRole("heading", { name: "Caught mail" })).toBeVisible();
   const frame = admin.frameLocator(`iframe[title="Mail: ${invitation.subject}"]`).first();
-  await expect(frame.getByRole("link", { name: "Accept the invitation" })).toHaveAttribute("href", inviteLink);
+  await expect(frame.getByRole("link", { name: "Accept the invitation" })).toHaveAttribute("href", inviteLink, { timeout: 20_000 });
   await admin.screenshot({ path: `${shots}/mail-07-caught-mail.png` });
   // Links in the sandboxed preview open in a new tab, where the used invitation says so.
   const [opened] = await Promise.all([admin.context().waitForEvent("page"), frame.getByRole("link", { name: "Accept the invitation" }).click()]);
   await expect(opened.getByTestId("link-problem")).toContainText("already been used");
   await opened.close();
-  await admin.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Mail queue" }).click();
+  await admin.goto("/admin/mail-queue");
   await expect(admin.getByTestId("queued-mail").filter({ hasText: invitee }).first()).toContainText("sent");
   await admin.screenshot({ path: `${shots}/mail-08-mail-queue.png`, fullPage: true });
 });

@@ -8,6 +8,9 @@ import { previewDocument } from "@/lib/mail/caught-preview";
 export const metadata: Metadata = { title: "Caught mail" };
 export const dynamic = "force-dynamic";
 
+// Each message is its own framed document; a long history would make the page heavy.
+const SHOWN = 40;
+
 export default async function CaughtMailPage() {
   const user = await currentUser();
   if (!user) redirect("/signin");
@@ -22,8 +25,13 @@ export default async function CaughtMailPage() {
       </p>
       {messages === undefined && <p role="alert" className="rounded bg-red-50 p-3 text-red-800">The local mail catcher is not answering.</p>}
       {messages?.length === 0 && <p className="rounded border border-dashed border-soil-200 bg-white p-6">No mail caught yet.</p>}
+      {messages && messages.length > SHOWN && (
+        <p className="mb-3 text-sm text-soil-700">
+          Showing the newest {SHOWN} of {messages.length} messages.
+        </p>
+      )}
       <ul className="space-y-3">
-        {messages?.map((message) => (
+        {messages?.slice(0, SHOWN).map((message) => (
           <li key={message.id} className="rounded border border-soil-200 bg-white p-4" data-testid="caught-mail">
             <p className="font-medium">{message.subject || "(no subject)"}</p>
             <p className="text-sm text-soil-700">
