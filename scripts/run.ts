@@ -11,7 +11,7 @@ import { ensureCluster, ensureDatabase } from "./lib/postgres";
 import { prepareDatabase } from "./lib/database";
 import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName } from "./lib/environment";
 import { say } from "./lib/log";
-import { shutdown, stopChildren } from "./lib/processes";
+import { shutdown, stopChildren, stopListeners } from "./lib/processes";
 import { bringUp, buildApp, nextBin, serveApp, startFakes } from "./lib/stack";
 import { summarizeReports } from "./lib/test-report";
 import { demoUsers, DEMO_PASSWORD } from "@/lib/demo/scenario";
@@ -71,6 +71,9 @@ async function test(args: string[]): Promise<void> {
     });
   }
   stopChildren();
+  // Fault tests restart the fakes outside this process's children; stop those too.
+  const ports = portsFor("test");
+  await stopListeners([ports.s3, ports.smtp, ports.mailHttp]);
   const summary = summarizeReports(reports, { expectUnits: runUnits, expectBrowser: runBrowser });
   process.stdout.write(`${summary.line}\n`);
   shutdown(summary.failed > 0 || summary.passed === 0 ? 1 : 0);

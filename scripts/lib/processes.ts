@@ -1,4 +1,4 @@
-import { spawn, type ChildProcess } from "node:child_process";
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import net from "node:net";
 import { say } from "./log";
 
@@ -6,11 +6,12 @@ const children: ChildProcess[] = [];
 const cleanups: (() => void)[] = [];
 let stopping = false;
 
-export function startChild(name: string, command: string, args: string[], env: Record<string, string>, cwd: string): ChildProcess {
+/** A critical child's exit ends the run; a test run's fakes may be stopped and restarted by fault tests. */
+export function startChild(name: string, command: string, args: string[], env: Record<string, string>, cwd: string, critical = true): ChildProcess {
   const child = spawn(command, args, { cwd, env: { ...process.env, ...env }, stdio: ["ignore", "inherit", "inherit"], detached: true });
   children.push(child);
   child.on("exit", (code, signal) => {
-    if (!stopping) {
+    if (!stopping && critical) {
       say(`${name} stopped (${signal ?? `exit ${code}`}); shutting down`);
       shutdown(1);
     }
@@ -78,4 +79,24 @@ export async function httpOk(url: string): Promise<boolean> {
   } catch {
     return false;
   }
+}
+
+/** Stops whatever listens on these loopback ports (a test run's fakes left from an earlier run). */
+export async function stopListeners(ports: number[]): Promise<void> {
+  const pidsOf = () => {
+    const pids = new Set<number>();
+    for (const port of ports) {
+      const output = spawnSync("ss", ["-ltnpH", `sport = :${port}`], { encoding: "utf8" }).stdout ?? "";
+      for (const match of output.matchAll(/pid=(\d+)/g)) pids.add(Number(match[1]));
+    }
+    return pids;
+  };
+  for (const pid of pidsOf()) {
+    try {
+      process.kill(pid, "SIGTERM");
+    } catch {
+      // already gone
+    }
+  }
+  for (let attempt = 0; attempt < 50 && pidsOf().size > 0; attempt += 1) await new Promise((resolve) => setTimeout(resolve, 100));
 }

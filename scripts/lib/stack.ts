@@ -9,13 +9,15 @@ import { ensureCluster, ensureDatabase, recreateDatabase } from "./postgres";
 import { prepareDatabase } from "./database";
 import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName, type Mode } from "./environment";
 import { say } from "./log";
-import { httpOk, onShutdown, portOpen, startChild, waitFor } from "./processes";
+import { httpOk, onShutdown, portOpen, startChild, stopListeners, waitFor } from "./processes";
 
 export const nextBin = path.join(projectRoot, "node_modules/next/dist/bin/next");
 const tsxBin = path.join(projectRoot, "node_modules/.bin/tsx");
 
 export async function startFakes(mode: Mode, env: Record<string, string>): Promise<void> {
   const ports = portsFor(mode);
+  // A test run starts from empty storage and mail: fakes left by an earlier run are replaced.
+  if (mode === "test") await stopListeners([ports.s3, ports.smtp, ports.mailHttp]);
   if (await portOpen(ports.smtp)) {
     say(`local S3 and mail fakes already running on ${ports.s3}/${ports.smtp}`);
     return;
@@ -30,7 +32,7 @@ export async function startFakes(mode: Mode, env: Record<string, string>): Promi
     FAKE_MAIL_HTTP_PORT: String(ports.mailHttp),
     FAKE_STATE_DIR: fakeState,
     FAKE_S3_BUCKETS: env.S3_BUCKET,
-  }, projectRoot);
+  }, projectRoot, mode !== "test");
   await waitFor("the local mail catcher", () => httpOk(`http://127.0.0.1:${ports.mailHttp}/health`), 30_000);
 }
 

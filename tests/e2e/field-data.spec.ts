@@ -69,16 +69,19 @@ test("a technician uploads a sheet, fixes a bad row, re-uploads, enters a plot b
   await expect(page.getByTestId("plot-block")).toHaveText("1");
   await page.getByLabel(/^Quadrat 1$|^Value$/).fill("17");
   await expect(page.getByTestId("entry-state")).toHaveText("Not saved yet: kept on this phone.");
+  // What was typed survives a reload before it is saved.
+  await page.reload();
+  await expect(page.getByLabel(/^Quadrat 1$|^Value$/)).toHaveValue("17");
+  await expect(page.getByTestId("entry-state")).toHaveText("Not saved yet: kept on this phone.");
+  // The connection drops while saving; the page says so and saves by itself when it returns.
   await page.context().setOffline(true);
   await page.getByRole("button", { name: "Save plot 101" }).click();
   await expect(page.getByTestId("entry-state")).toContainText("No connection. Your values are kept on this phone");
-  await page.reload().catch(() => {});
   await page.context().setOffline(false);
-  await page.goto(`/trials/${trialId}/plots/101`);
+  await expect(page.getByTestId("entry-state")).toHaveText(/Saved as version \d+\./, { timeout: 30_000 });
+  await page.reload();
   await expect(page.getByLabel(/^Quadrat 1$|^Value$/)).toHaveValue("17");
-  await expect(page.getByTestId("entry-state")).toHaveText("Not saved yet: kept on this phone.");
-  await page.getByRole("button", { name: "Save plot 101" }).click();
-  await expect(page.getByTestId("entry-state")).toHaveText(/Saved as version \d+\./);
+  await expect(page.getByTestId("entry-state")).toHaveText("Showing the saved values.");
 
   await page.getByLabel("Caption (optional)").fill("Purslane mat in the furrow");
   await page.getByLabel("Photo", { exact: true }).setInputFiles({ name: "plot101.png", mimeType: "image/png", buffer: fieldPhotoPng() });
