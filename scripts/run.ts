@@ -75,8 +75,7 @@ async function test(args: string[]): Promise<void> {
   const ports = portsFor("test");
   await stopListeners([ports.s3, ports.smtp, ports.mailHttp]);
   const summary = summarizeReports(reports, { expectUnits: runUnits, expectBrowser: runBrowser });
-  process.stdout.write(`${summary.line}\n`);
-  shutdown(summary.failed > 0 || summary.passed === 0 ? 1 : 0);
+  shutdown(summary.failed > 0 || summary.passed === 0 ? 1 : 0, summary.line);
 }
 
 async function setupOnly(args: string[]): Promise<void> {

@@ -24,7 +24,7 @@ export function onShutdown(cleanup: () => void): void {
 }
 
 /** Stops what this run started, children first (whole process groups), then the database. */
-export function shutdown(exitCode: number): never {
+export function shutdown(exitCode: number, finalLine?: string): never {
   stopping = true;
   for (const child of children) {
     if (child.pid && child.exitCode === null) {
@@ -36,6 +36,8 @@ export function shutdown(exitCode: number): never {
     }
   }
   for (const cleanup of cleanups.reverse()) cleanup();
+  // The test summary must be the very last line, after any clean-up messages.
+  if (finalLine) process.stdout.write(`${finalLine}\n`);
   process.exit(exitCode);
 }
 
