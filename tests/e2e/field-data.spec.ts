@@ -1,15 +1,9 @@
+import { signIn } from "./support/session";
 import { expect, test, type Page } from "@playwright/test";
 import { fieldPhotoPng } from "./support/png";
 
 const PASSWORD = "hoebench-demo";
 
-async function signIn(page: Page, email: string) {
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).not.toHaveURL(/signin/);
-}
 
 async function openLettuceTrial(page: Page) {
   await page.goto("/trials");

@@ -1,17 +1,10 @@
+import { signIn } from "./support/session";
 import { readFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
 
 const PASSWORD = "hoebench-demo";
 const ONION = "Onion weed control: hand hoeing, straw mulch and finger cultivation";
 
-async function signIn(page: Page, email: string) {
-  await page.context().clearCookies();
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).not.toHaveURL(/signin/);
-}
 
 test("a signed-out visitor searches the library, reads the onion summary with costs per acre, and downloads its data", async ({ page }) => {
   await page.context().clearCookies();

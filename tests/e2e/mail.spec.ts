@@ -1,3 +1,4 @@
+import { signIn } from "./support/session";
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { Op, type Sequelize } from "sequelize";
 import { Invitation, User } from "@/models";
@@ -34,13 +35,6 @@ function link(mail: CaughtMail, pathPrefix: string): string {
   return found;
 }
 
-async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).not.toHaveURL(/signin/);
-}
 
 async function freshPage(browser: Browser): Promise<Page> {
   return (await browser.newContext()).newPage();

@@ -1,14 +1,8 @@
+import { signIn } from "./support/session";
 import { expect, test, type Page } from "@playwright/test";
 
 const PASSWORD = "hoebench-demo";
 
-async function signIn(page: Page, email: string) {
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).not.toHaveURL(/signin/);
-}
 
 async function openResults(page: Page) {
   await page.goto("/trials");

@@ -1,3 +1,4 @@
+import { signIn } from "./support/session";
 import { writeFileSync } from "node:fs";
 import { expect, test, type Page } from "@playwright/test";
 import pg from "pg";
@@ -5,14 +6,6 @@ import pg from "pg";
 const PASSWORD = "hoebench-demo";
 const TITLE = "Lettuce weed control: mulches, flame, cultivation and a solar weeding robot (second site)";
 
-async function signIn(page: Page, email: string) {
-  await page.context().clearCookies();
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).not.toHaveURL(/signin/);
-}
 
 let lockedTrialId: string | null = null;
 

@@ -1,12 +1,6 @@
+import { signIn } from "./support/session";
 import { expect, test, type Page } from "@playwright/test";
 
-async function signIn(page: Page, email: string) {
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill("hoebench-demo");
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).not.toHaveURL(/signin/);
-}
 
 test("every page works under the content security policy, charts included", async ({ page }) => {
   const violations: string[] = [];
