@@ -3,7 +3,7 @@ import { db } from "@/lib/db/sequelize";
 import { AppError } from "@/lib/errors";
 import { findAssessment } from "@/lib/data/assessments";
 import { findPlotByNumber } from "@/lib/data/plots";
-import { assertRecordable } from "@/lib/uploads/service";
+import { assertRecordable } from "./recordable";
 import type { SessionUser } from "@/lib/auth/session";
 import type { PlotEntryInput } from "@/lib/validations/observations";
 import type { Trial } from "@/models";

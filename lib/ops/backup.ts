@@ -4,7 +4,7 @@ import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import pg from "pg";
 import type { AppConfig } from "@/lib/config";
-import { objectStore } from "@/scripts/lib/object-store";
+import { objectStore } from "./object-store";
 import { referencedKeysSql } from "./object-references";
 
 const POSTGRES_BIN = "/usr/lib/postgresql/15/bin";

@@ -3,7 +3,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import pg from "pg";
 import type { AppConfig } from "@/lib/config";
-import { objectStore } from "@/scripts/lib/object-store";
+import { objectStore } from "./object-store";
 import { objectFilePath, sha256Of, tableRowCounts, type BackupManifest } from "./backup";
 
 const POSTGRES_BIN = "/usr/lib/postgresql/15/bin";

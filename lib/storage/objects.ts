@@ -50,11 +50,6 @@ export async function readObject(key: string): Promise<AsyncIterable<Uint8Array>
   }
 }
 
-export async function readObjectBytes(key: string): Promise<Buffer> {
-  const parts: Uint8Array[] = [];
-  for await (const part of await readObject(key)) parts.push(part);
-  return Buffer.concat(parts);
-}
 
 export async function writeObject(key: string, body: Buffer | string, contentType: string): Promise<void> {
   try {

@@ -12,6 +12,7 @@ import type { SessionUser } from "@/lib/auth/session";
 import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
 import { notify } from "@/lib/notifications/notify";
+import { assertRecordable } from "@/lib/observations/recordable";
 import { ingestContextFor } from "./context";
 
 export interface StartedUpload {
@@ -71,12 +72,6 @@ export async function startUpload(user: SessionUser, trial: Trial, input: StartU
     versionId: null,
   });
   return { uploadId: id, putUrl, contentType: CONTENT_TYPE };
-}
-
-/** Data are recorded on active trials, and with a reason on locked ones; never on drafts or published trials. */
-export function assertRecordable(trial: Trial): void {
-  if (trial.status === "draft") throw new AppError("CONFLICT", "Activate the trial before recording data: its plan may still change.");
-  if (trial.status === "published") throw new AppError("CONFLICT", "This trial is published; its data can no longer change.");
 }
 
 async function loadUpload(uploadId: string): Promise<Upload> {

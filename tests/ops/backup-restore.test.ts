@@ -6,7 +6,7 @@ import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { parseConfig } from "@/lib/config";
 import { Photo } from "@/models";
-import { objectStore } from "@/scripts/lib/object-store";
+import { objectStore } from "@/lib/ops/object-store";
 import { POSTGRES_PORT, projectRoot } from "@/scripts/lib/environment";
 import { psql } from "@/scripts/lib/postgres";
 import { createTrialFixture, removeTrialFixtures } from "../factories/trials";

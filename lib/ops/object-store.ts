@@ -1,7 +1,7 @@
 import { CreateBucketCommand, GetObjectCommand, HeadBucketCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import type { AppConfig } from "@/lib/config";
 
-/** A plain S3 client for operations scripts (the app's own module is server-only). */
+/** A plain S3 client for backups and restores, which run outside the app (its own module is server-only). */
 export function objectStore(settings: AppConfig) {
   const client = new S3Client({
     endpoint: settings.S3_ENDPOINT,
