@@ -52,7 +52,9 @@ test("a researcher edits the generated summary of a locked trial and publishes i
   await page.getByRole("button", { name: "Publish to the library" }).click();
   await page.screenshot({ path: "test-results/summary-publish-confirm.png", fullPage: true });
   await page.getByRole("button", { name: "Publish now" }).click();
-  await expect(page.getByText("Published. Growers can read it in the library now.")).toBeVisible();
+  // The editor's refresh swaps it for the page's published notice; wait for that, the settled state.
+  await expect(page.getByRole("status").filter({ hasText: /Published on \d{4}-\d{2}-\d{2}\. Growers can read it in the library now/ })).toBeVisible();
+  await expect(page.getByLabel("Summary text")).toHaveCount(0);
   await page.screenshot({ path: "test-results/summary-published.png", fullPage: true });
 
   await page.context().clearCookies();

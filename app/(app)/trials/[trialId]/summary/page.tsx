@@ -30,18 +30,18 @@ export default async function TrialSummaryPage({ params }: { params: Promise<{ t
       <p className="mb-4 max-w-prose text-sm text-soil-700">
         The plain-language summary growers read in the public library, generated from the reviewed results. You can edit the words before publishing; the numbers it came from are
         kept with it.
-        {trial.status === "published" && (
-          <>
-            {" "}
-            Published{view.published ? ` on ${view.published.at.toISOString().slice(0, 10)}` : ""}:{" "}
-            <Link href={`/library/${trial.id}`} className="text-leaf-700 underline">
-              open it in the library
-            </Link>
-            .
-          </>
-        )}
         {trial.status !== "published" && trial.status !== "locked" && " The trial can be published once the reviewer has signed it off (locked)."}
       </p>
+      {trial.status === "published" && (
+        // After publishing, the editor's refresh lands here, so this notice is what the researcher is left reading.
+        <p role="status" className="mb-4 rounded bg-leaf-50 px-3 py-2 text-sm text-leaf-900">
+          Published{view.published ? ` on ${view.published.at.toISOString().slice(0, 10)}` : ""}. Growers can read it in the library now:{" "}
+          <Link href={`/library/${trial.id}`} className="underline">
+            open it in the library
+          </Link>
+          .
+        </p>
+      )}
       {canEdit ? (
         <SummaryEditor trialId={trial.id} initialText={view.text} generatedText={view.generated.text} edited={view.edited} canPublish={canPublish} status={trial.status} />
       ) : (
