@@ -4,9 +4,10 @@ export const versionSources = ["upload", "manual"] as const;
 export type VersionSource = (typeof versionSources)[number];
 
 /**
- * Each committed change to an assessment's data is a numbered version (1, 2, 3, …). The
- * observations a version brought in and the ones it replaced are found through it, so any
- * earlier state and every change can be shown.
+ * Each committed change to an assessment's data is a numbered version (1, 2, 3, …). Its
+ * insert opens one observation set per plot it covers and closes those plots' earlier sets
+ * (a database trigger), so the values a version brought in and the ones it replaced are
+ * found through it, and any earlier state and every change can be shown.
  */
 export class DatasetVersion extends Model<InferAttributes<DatasetVersion>, InferCreationAttributes<DatasetVersion>> {
   declare id: CreationOptional<string>;
@@ -20,6 +21,8 @@ export class DatasetVersion extends Model<InferAttributes<DatasetVersion>, Infer
   declare reason: string | null;
   declare rowsAdded: number;
   declare rowsReplaced: number;
+  /** The plots whose earlier values this version replaces; null: the whole assessment (an upload). */
+  declare scopePlotIds: CreationOptional<string[] | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
@@ -35,6 +38,7 @@ export class DatasetVersion extends Model<InferAttributes<DatasetVersion>, Infer
         reason: { type: DataTypes.TEXT, allowNull: true },
         rowsAdded: { type: DataTypes.INTEGER, allowNull: false },
         rowsReplaced: { type: DataTypes.INTEGER, allowNull: false },
+        scopePlotIds: { type: DataTypes.ARRAY(DataTypes.UUID), allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: "dataset_versions", modelName: "DatasetVersion", updatedAt: false },

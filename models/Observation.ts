@@ -2,8 +2,11 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 
 /**
  * A raw value as recorded in the field: one quadrat (and species, where recorded) of one
- * plot. Rows are never updated in place: a change closes the old row (replacedInVersionId)
- * and adds a new one, so raw values are never overwritten.
+ * plot. Rows are never updated: a later version covering the plot supersedes its set
+ * (observation_sets) and adds new rows, so raw values are never overwritten. Current values
+ * are read through the view current_observations. In the database the primary key is
+ * (assessment_id, added_in_version_id, id), the one index every read uses; id alone is
+ * unique too, which is all Sequelize needs to know.
  */
 export class Observation extends Model<InferAttributes<Observation>, InferCreationAttributes<Observation>> {
   declare id: CreationOptional<number>;
@@ -13,7 +16,6 @@ export class Observation extends Model<InferAttributes<Observation>, InferCreati
   declare species: CreationOptional<string>;
   declare value: number;
   declare addedInVersionId: string;
-  declare replacedInVersionId: string | null;
 
   static initModel(sequelize: Sequelize): void {
     Observation.init(
@@ -25,7 +27,6 @@ export class Observation extends Model<InferAttributes<Observation>, InferCreati
         species: { type: DataTypes.STRING(80), allowNull: false, defaultValue: "" },
         value: { type: DataTypes.DOUBLE, allowNull: false },
         addedInVersionId: { type: DataTypes.UUID, allowNull: false },
-        replacedInVersionId: { type: DataTypes.UUID, allowNull: true },
       },
       { sequelize, tableName: "observations", modelName: "Observation", timestamps: false },
     );

@@ -21,8 +21,8 @@ export interface AssessmentDataStatus {
 export async function dataStatusOf(trialId: string): Promise<AssessmentDataStatus[]> {
   return db().query<AssessmentDataStatus>(
     `SELECT a.id, a.name, a.variable, a.unit, a.planned_date AS "plannedDate", a.quadrats_per_plot AS "quadratsPerPlot",
-            (SELECT count(*)::int FROM observations o WHERE o.assessment_id = a.id AND o.replaced_in_version_id IS NULL) AS values,
-            (SELECT count(DISTINCT o.plot_id)::int FROM observations o WHERE o.assessment_id = a.id AND o.replaced_in_version_id IS NULL) AS "plotsWithValues",
+            (SELECT COALESCE(sum(s.row_count), 0)::int FROM observation_sets s WHERE s.assessment_id = a.id AND s.replaced_in_version_id IS NULL) AS values,
+            (SELECT count(*)::int FROM observation_sets s WHERE s.assessment_id = a.id AND s.replaced_in_version_id IS NULL AND s.row_count > 0) AS "plotsWithValues",
             (SELECT max(v.number) FROM dataset_versions v WHERE v.assessment_id = a.id) AS "latestVersion",
             (SELECT max(v.created_at) FROM dataset_versions v WHERE v.assessment_id = a.id) AS "updatedAt"
        FROM assessments a WHERE a.trial_id = :trialId ORDER BY a.position`,

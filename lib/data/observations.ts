@@ -6,8 +6,8 @@ import type { RawValue } from "@/lib/observations/plot-values";
 export async function currentRawValues(assessmentId: string): Promise<RawValue[]> {
   return db().query<RawValue>(
     `SELECT p.number AS "plotNumber", o.quadrat, o.species, o.value
-       FROM observations o JOIN plots p ON p.id = o.plot_id
-      WHERE o.assessment_id = :assessmentId AND o.replaced_in_version_id IS NULL
+       FROM current_observations o JOIN plots p ON p.id = o.plot_id
+      WHERE o.assessment_id = :assessmentId
       ORDER BY p.number, o.quadrat, o.species`,
     { replacements: { assessmentId }, type: QueryTypes.SELECT },
   );
@@ -52,8 +52,12 @@ export interface ValueChange {
 /** What one version changed against the values it replaced; unchanged values are left out. */
 export async function changesIn(versionId: string): Promise<ValueChange[]> {
   return db().query<ValueChange>(
-    `WITH added AS (SELECT plot_id, quadrat, species, value FROM observations WHERE added_in_version_id = :versionId),
-          replaced AS (SELECT plot_id, quadrat, species, value FROM observations WHERE replaced_in_version_id = :versionId)
+    `WITH version AS (SELECT id, assessment_id FROM dataset_versions WHERE id = :versionId),
+          added AS (SELECT o.plot_id, o.quadrat, o.species, o.value FROM version v
+                      JOIN observations o ON o.assessment_id = v.assessment_id AND o.added_in_version_id = v.id),
+          replaced AS (SELECT o.plot_id, o.quadrat, o.species, o.value FROM version v
+                      JOIN observation_sets s ON s.replaced_in_version_id = v.id
+                      JOIN observations o ON o.assessment_id = s.assessment_id AND o.added_in_version_id = s.version_id AND o.plot_id = s.plot_id)
      SELECT p.number AS "plotNumber", COALESCE(a.quadrat, r.quadrat) AS quadrat, COALESCE(a.species, r.species) AS species,
             r.value AS before, a.value AS after
        FROM added a FULL OUTER JOIN replaced r ON a.plot_id = r.plot_id AND a.quadrat = r.quadrat AND a.species = r.species
@@ -73,8 +77,8 @@ export interface PlotAssessmentValues {
 export async function currentValuesOfPlot(trialId: string, plotNumber: number): Promise<PlotAssessmentValues[]> {
   const rows = await db().query<{ assessmentId: string; quadrat: number; species: string; value: number }>(
     `SELECT o.assessment_id AS "assessmentId", o.quadrat, o.species, o.value
-       FROM observations o JOIN plots p ON p.id = o.plot_id
-      WHERE p.trial_id = :trialId AND p.number = :plotNumber AND o.replaced_in_version_id IS NULL
+       FROM current_observations o JOIN plots p ON p.id = o.plot_id
+      WHERE p.trial_id = :trialId AND p.number = :plotNumber
       ORDER BY o.quadrat, o.species`,
     { replacements: { trialId, plotNumber }, type: QueryTypes.SELECT },
   );

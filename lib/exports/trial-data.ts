@@ -10,12 +10,12 @@ export async function rawValuesCsv(trial: Trial, assessmentId?: string): Promise
   const rows = await db().query<Record<string, string | number>>(
     `SELECT a.name AS assessment, p.number AS plot, p.block, t.code AS treatment_code, t.name AS treatment,
             o.quadrat, o.species, o.value, a.unit, v.number AS version
-       FROM observations o
+       FROM current_observations o
        JOIN assessments a ON a.id = o.assessment_id
        JOIN plots p ON p.id = o.plot_id
        JOIN treatments t ON t.id = p.treatment_id
        JOIN dataset_versions v ON v.id = o.added_in_version_id
-      WHERE a.trial_id = :trialId AND o.replaced_in_version_id IS NULL ${assessmentId ? "AND a.id = :assessmentId" : ""}
+      WHERE a.trial_id = :trialId ${assessmentId ? "AND a.id = :assessmentId" : ""}
       ORDER BY a.position, p.number, o.quadrat, o.species`,
     { replacements: { trialId: trial.id, assessmentId: assessmentId ?? null }, type: QueryTypes.SELECT },
   );

@@ -1,8 +1,10 @@
 import "server-only";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
+import type pg from "pg";
 import { AuditEvent, DatasetVersion } from "@/models";
 import type { VersionSource } from "@/models/DatasetVersion";
+import { copyValues } from "./copy-values";
 
 export interface NewValue {
   plotNumber: number;
@@ -30,8 +32,6 @@ export interface CommittedVersion {
   rowsReplaced: number;
 }
 
-const INSERT_CHUNK = 25_000;
-
 async function lockAssessment(sequelize: Sequelize, request: CommitRequest, transaction: Transaction) {
   const [row] = await sequelize.query<{ status: string }>(
     `SELECT t.status FROM assessments a JOIN trials t ON t.id = a.trial_id
@@ -42,32 +42,38 @@ async function lockAssessment(sequelize: Sequelize, request: CommitRequest, tran
   return row.status;
 }
 
-async function insertValues(sequelize: Sequelize, request: CommitRequest, versionId: string, plotIds: Map<number, string>, transaction: Transaction) {
-  for (let start = 0; start < request.values.length; start += INSERT_CHUNK) {
-    const chunk = request.values.slice(start, start + INSERT_CHUNK);
-    await sequelize.query(
-      `INSERT INTO observations (assessment_id, plot_id, quadrat, species, value, added_in_version_id)
-       SELECT :assessmentId, plot_id, quadrat, species, value, :versionId
-         FROM unnest(:plotIds::uuid[], :quadrats::int[], :species::text[], :values::float8[]) AS v(plot_id, quadrat, species, value)`,
-      {
-        replacements: {
-          assessmentId: request.assessmentId,
-          versionId,
-          plotIds: `{${chunk.map((value) => plotIds.get(value.plotNumber)).join(",")}}`,
-          quadrats: `{${chunk.map((value) => value.quadrat).join(",")}}`,
-          species: `{${chunk.map((value) => `"${value.species.replace(/(["\\])/g, "\\$1")}"`).join(",")}}`,
-          values: `{${chunk.map((value) => value.value).join(",")}}`,
-        },
-        transaction,
-      },
-    );
+/**
+ * One value per plot, quadrat and species in a version. Uploads and plot entries check this
+ * for the user with row numbers; this is the last line, kept here rather than as a unique
+ * index, which would cost a third of a large commit.
+ */
+function assertOneValueEach(values: readonly NewValue[], plotIndex: Map<number, number>): void {
+  const seenBySpecies = new Map<string, Set<number>>();
+  for (const value of values) {
+    let seen = seenBySpecies.get(value.species);
+    if (!seen) seenBySpecies.set(value.species, (seen = new Set()));
+    if (!Number.isInteger(value.quadrat) || value.quadrat < 1 || value.quadrat >= 65_536) throw new AppError("INVALID_INPUT", `Quadrat ${value.quadrat} is not a quadrat number.`);
+    // Small integers while plots are few, which they are: no string per value.
+    const key = plotIndex.get(value.plotNumber)! * 65_536 + value.quadrat;
+    if (seen.has(key)) {
+      throw new AppError("INVALID_INPUT", `Plot ${value.plotNumber}, quadrat ${value.quadrat}${value.species ? `, ${value.species}` : ""} has more than one value.`);
+    }
+    seen.add(key);
   }
+}
+
+/** Sequelize keeps the pg client of a transaction here; COPY has to run on that very client. */
+function clientOf(transaction: Transaction): pg.ClientBase {
+  const client = (transaction as unknown as { connection?: pg.ClientBase }).connection;
+  if (!client) throw new Error("the transaction has no connection");
+  return client;
 }
 
 /**
  * Writes a new numbered version of an assessment's data in one transaction: all of it or
  * none. The assessment row is locked first, so two commits at once become versions N and
- * N+1 in turn, never a mix. Old rows are closed, not overwritten.
+ * N+1 in turn, never a mix. Old values are superseded plot by plot (observation sets), never
+ * overwritten; the new ones go in with one binary COPY.
  */
 export async function commitVersion(sequelize: Sequelize, request: CommitRequest): Promise<CommittedVersion> {
   return sequelize.transaction(async (transaction) => {
@@ -87,6 +93,7 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
     const unknown = request.values.find((value) => !plotIds.has(value.plotNumber));
     if (unknown) throw new AppError("INVALID_INPUT", `Plot ${unknown.plotNumber} is not in this trial.`);
+    assertOneValueEach(request.values, new Map(plots.map((plot, index) => [plot.number, index])));
 
     const [{ next }] = await sequelize.query<{ next: number }>(
       "SELECT COALESCE(MAX(number), 0) + 1 AS next FROM dataset_versions WHERE assessment_id = :assessmentId",
@@ -103,21 +110,17 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
         reason,
         rowsAdded: request.values.length,
         rowsReplaced: 0,
+        scopePlotIds: request.replacePlotNumbers ? request.replacePlotNumbers.map((number) => plotIds.get(number)).filter((id): id is string => Boolean(id)) : null,
       },
       { transaction },
     );
 
-    const scope = request.replacePlotNumbers
-      ? { clause: "AND plot_id = ANY(:scopePlotIds::uuid[])", scopePlotIds: `{${request.replacePlotNumbers.map((n) => plotIds.get(n)).filter(Boolean).join(",")}}` }
-      : { clause: "", scopePlotIds: "{}" };
-    const [, replaced] = (await sequelize.query(
-      `UPDATE observations SET replaced_in_version_id = :versionId
-        WHERE assessment_id = :assessmentId AND replaced_in_version_id IS NULL ${scope.clause}`,
-      { replacements: { versionId: version.id, assessmentId: request.assessmentId, scopePlotIds: scope.scopePlotIds }, transaction },
-    )) as [unknown, { rowCount?: number } | number];
-    const rowsReplaced = typeof replaced === "number" ? replaced : (replaced?.rowCount ?? 0);
-
-    await insertValues(sequelize, request, version.id, plotIds, transaction);
+    // The version's insert trigger has closed the earlier sets of the plots it covers.
+    const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
+      'SELECT COALESCE(sum(row_count), 0)::int AS "rowsReplaced" FROM observation_sets WHERE replaced_in_version_id = :versionId',
+      { replacements: { versionId: version.id }, type: QueryTypes.SELECT, transaction },
+    );
+    if (request.values.length > 0) await copyValues(clientOf(transaction), request.values, request.assessmentId, version.id, plotIds);
     if (request.uploadId) {
       // Inside the same transaction, so a file can never become two versions.
       const [, marked] = (await sequelize.query(

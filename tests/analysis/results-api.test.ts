@@ -13,8 +13,8 @@ let demo: { trialId: string; assessmentId: string };
 async function demoPlotRows(trialId: string, assessmentId: string) {
   return testDatabase().query<{ treatment: string; block: string; response: number | string }>(
     `SELECT t.code AS treatment, p.block::text AS block, COALESCE((
-        SELECT avg(q.total) / 0.25 FROM (SELECT sum(o.value) AS total FROM observations o
-          WHERE o.plot_id = p.id AND o.assessment_id = :assessmentId AND o.replaced_in_version_id IS NULL GROUP BY o.quadrat) q)::text, 'NA') AS response
+        SELECT avg(q.total) / 0.25 FROM (SELECT sum(o.value) AS total FROM current_observations o
+          WHERE o.plot_id = p.id AND o.assessment_id = :assessmentId GROUP BY o.quadrat) q)::text, 'NA') AS response
        FROM plots p JOIN treatments t ON t.id = p.treatment_id WHERE p.trial_id = :trialId ORDER BY p.number`,
     { replacements: { trialId, assessmentId }, type: QueryTypes.SELECT },
   );

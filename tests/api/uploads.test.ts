@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DatasetVersion, Membership, Observation, Upload, User } from "@/models";
+import { QueryTypes } from "sequelize";
+import { DatasetVersion, Membership, Upload, User } from "@/models";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
 import { signedInAs, type TestClient } from "../support/http";
@@ -25,6 +26,14 @@ async function upload(client: TestClient, content: string | Uint8Array, fileName
   return { started, check, uploadId: uploadId as string, body: await check.json() };
 }
 
+async function currentValues(where: { assessmentId: string; plotId?: string }) {
+  return testDatabase().query<{ quadrat: number; value: number }>(
+    `SELECT quadrat, value FROM current_observations
+      WHERE assessment_id = :assessmentId ${where.plotId ? "AND plot_id = :plotId" : ""} ORDER BY quadrat, species`,
+    { replacements: { assessmentId: where.assessmentId, plotId: where.plotId ?? null }, type: QueryTypes.SELECT },
+  );
+}
+
 beforeAll(async () => {
   fixture = await createTrialFixture();
   const technicianUser = await User.findOne({ where: { email: "technician@hoebench.test" } });
@@ -40,7 +49,7 @@ describe("uploading a data file", () => {
     const commit = await technician.request(`/api/uploads/${uploadId}/commit`, { method: "POST", json: {} });
     expect(commit.status).toBe(201);
     expect(await commit.json()).toMatchObject({ number: 1, rowsAdded: 24, rowsReplaced: 0 });
-    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id, replacedInVersionId: null } })).toBe(24);
+    expect(await currentValues({ assessmentId: fixture.assessment.id })).toHaveLength(24);
     const stored = await Upload.findByPk(uploadId);
     expect(stored?.status).toBe("committed");
     expect(stored?.sha256).toMatch(/^[0-9a-f]{64}$/);
@@ -117,7 +126,7 @@ describe("per-plot entry", () => {
     expect(response.status).toBe(201);
     const body = await response.json();
     expect(body).toMatchObject({ rowsAdded: 1, rowsReplaced: 2 });
-    const current = await Observation.findAll({ where: { assessmentId: fixture.assessment.id, plotId: fixture.plots.find((plot) => plot.number === 203)!.id, replacedInVersionId: null } });
+    const current = await currentValues({ assessmentId: fixture.assessment.id, plotId: fixture.plots.find((plot) => plot.number === 203)!.id });
     expect(current.map((row) => [row.quadrat, row.value])).toEqual([[1, 12]]);
   });
 

@@ -2,6 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import { commitVersion, type NewValue } from "@/lib/observations/commit-version";
 import { AppError } from "@/lib/errors";
+import { changesIn } from "@/lib/data/observations";
 import { AuditEvent, DatasetVersion, Observation } from "@/models";
 import { createSequelize } from "@/lib/db/sequelize";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
@@ -13,7 +14,11 @@ function valuesFor(fixture: TrialFixture, value: (plotNumber: number, quadrat: n
 }
 
 async function currentValues(assessmentId: string) {
-  return Observation.findAll({ where: { assessmentId, replacedInVersionId: null }, order: [["id", "ASC"]] });
+  return testDatabase().query<{ plotId: string; quadrat: number; species: string; value: number; addedInVersionId: string }>(
+    `SELECT plot_id AS "plotId", quadrat, species, value, added_in_version_id AS "addedInVersionId"
+       FROM current_observations WHERE assessment_id = :assessmentId ORDER BY id`,
+    { replacements: { assessmentId }, type: QueryTypes.SELECT },
+  );
 }
 
 describe("committing a version of an assessment's data", () => {
@@ -51,6 +56,53 @@ describe("committing a version of an assessment's data", () => {
     const current = await currentValues(fixture.assessment.id);
     expect(current).toHaveLength(24);
     expect(current.filter((row) => row.value !== 5).map((row) => row.value).sort()).toEqual([11, 9]);
+  });
+
+  it("shows what a version changed against the values it replaced", async () => {
+    const fixture = await createTrialFixture();
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id };
+    await commitVersion(testDatabase(), { ...request, source: "upload", values: valuesFor(fixture, () => 5) });
+    const manual = await commitVersion(testDatabase(), {
+      ...request,
+      source: "manual",
+      replacePlotNumbers: [102],
+      values: [{ plotNumber: 102, quadrat: 1, species: "", value: 5 }],
+    });
+    expect(await changesIn(manual.id)).toEqual([{ plotNumber: 102, quadrat: 2, species: "", before: 5, after: null }]);
+    const upload = await commitVersion(testDatabase(), { ...request, source: "upload", values: valuesFor(fixture, (plot, quadrat) => (plot === 101 && quadrat === 2 ? 7 : 5)) });
+    expect(upload.rowsReplaced).toBe(23);
+    expect(await changesIn(upload.id)).toEqual([
+      { plotNumber: 101, quadrat: 2, species: "", before: 5, after: 7 },
+      { plotNumber: 102, quadrat: 2, species: "", before: null, after: 5 },
+    ]);
+  });
+
+  it("refuses a value twice in one version, or outside its version's plots, and removes values with their assessment", async () => {
+    const fixture = await createTrialFixture();
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id };
+    const twice = [{ plotNumber: 101, quadrat: 1, species: "", value: 3 }, { plotNumber: 101, quadrat: 1, species: "", value: 4 }];
+    await expect(commitVersion(testDatabase(), { ...request, source: "manual", replacePlotNumbers: [101], values: twice })).rejects.toMatchObject({
+      code: "INVALID_INPUT",
+      message: "Plot 101, quadrat 1 has more than one value.",
+    });
+    const manual = await commitVersion(testDatabase(), { ...request, source: "manual", replacePlotNumbers: [101], values: [{ plotNumber: 101, quadrat: 1, species: "", value: 3 }] });
+    // Straight SQL, as a seed or a repair script would write.
+    const insert = (plotId: string, quadrat: number) =>
+      testDatabase().query(
+        "INSERT INTO observations (assessment_id, plot_id, quadrat, value, added_in_version_id) VALUES (:assessmentId, :plotId, :quadrat, 1, :versionId)",
+        { replacements: { assessmentId: fixture.assessment.id, plotId, quadrat, versionId: manual.id } },
+      );
+    const plot = (number: number) => fixture.plots.find((candidate) => candidate.number === number)!.id;
+    await expect(insert(plot(102), 1)).rejects.toThrow(/must belong to an observation set/);
+    await insert(plot(101), 2);
+    expect(await currentValues(fixture.assessment.id)).toHaveLength(2);
+    const [{ rowCount }] = await testDatabase().query<{ rowCount: number }>(
+      'SELECT row_count AS "rowCount" FROM observation_sets WHERE version_id = :versionId',
+      { replacements: { versionId: manual.id }, type: QueryTypes.SELECT },
+    );
+    expect(rowCount).toBe(2);
+    await fixture.assessment.destroy();
+    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
   });
 
   it("asks for a reason once the trial is locked, and marks the change for the reviewer", async () => {
@@ -97,19 +149,23 @@ describe("committing a version of an assessment's data", () => {
     const victim = createSequelize(testEnvironment().databaseUrl, 1, { bindModels: false });
     const many: NewValue[] = [];
     for (const plot of fixture.plots) for (let quadrat = 1; quadrat <= 50; quadrat += 1) for (const species of ["a", "b", "c", "d", "e", "f", "g", "h"]) many.push({ plotNumber: plot.number, quadrat, species, value: quadrat });
-    const commit = commitVersion(victim, { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload", values: many });
+    // Settled as soon as the connection dies, possibly before the killer's own query returns.
+    const failure = commitVersion(victim, { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload", values: many }).then(
+      () => null,
+      (error: unknown) => error,
+    );
     const killer = testDatabase();
     let killed = 0;
     for (let attempt = 0; attempt < 400 && killed === 0; attempt += 1) {
       const rows = await killer.query<{ killed: boolean }>(
-        "SELECT pg_terminate_backend(pid) AS killed FROM pg_stat_activity WHERE query LIKE 'INSERT INTO observations%' AND pid <> pg_backend_pid()",
+        "SELECT pg_terminate_backend(pid) AS killed FROM pg_stat_activity WHERE query LIKE 'COPY observations%' AND pid <> pg_backend_pid()",
         { type: QueryTypes.SELECT },
       );
       killed = rows.filter((row) => row.killed).length;
       if (!killed) await new Promise((resolve) => setTimeout(resolve, 5));
     }
     expect(killed).toBe(1);
-    await expect(commit).rejects.toThrow();
+    expect(await failure).toBeInstanceOf(Error);
     await victim.close().catch(() => {});
     expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
     expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
