@@ -3,10 +3,18 @@ import type { IngestContext, IngestProblem, IngestRecord, IngestResult } from ".
 import { readNumberCell, readWholeNumber } from "./values";
 
 const MAX_PROBLEMS_SHOWN = 500;
+const SPECIES_TABLES = 32;
 
 function describePlots(numbers: number[]): string {
   const sorted = [...numbers].sort((a, b) => a - b);
   return sorted.length > 12 ? `${sorted.slice(0, 12).join(", ")} and ${sorted.length - 12} more` : sorted.join(", ");
+}
+
+const describeCell = (plotNumber: number, quadrat: number, species: string) => `plot ${plotNumber}, quadrat ${quadrat}${species ? `, ${species}` : ""}`;
+
+function isBlank(cells: string[]): boolean {
+  for (const cell of cells) if (cell !== "" && cell.trim() !== "") return false;
+  return true;
 }
 
 /**
@@ -18,9 +26,20 @@ export class RowChecker {
   private map: ColumnMap | null = null;
   private headerSeen = false;
   private headerWidth = 0;
-  private readonly plotsByNumber: Map<number, string>;
-  /** Rows already seen per plot and quadrat (plot × 64 + quadrat), then per species. */
-  private readonly seen = new Map<number, Map<string, number>>();
+  /** Plot number → position in context.plots. */
+  private readonly plotIndexes: Map<number, number>;
+  /** Slots per plot in the tables below: quadrats 1 … quadratsPerPlot. */
+  private readonly stride: number;
+  /**
+   * The row of every value so far (0: none yet), per species (numbered in speciesNumbers),
+   * at plot index × stride + quadrat: flat arrays, since a 100,000-row file fills every slot.
+   * Species past the first SPECIES_TABLES share one map instead, to bound the memory.
+   */
+  private readonly seen: Int32Array[] = [];
+  private readonly seenOverflow = new Map<number, number>();
+  /** 1 where a plot's quadrat has a value of any species. */
+  private readonly quadratsWithValues: Uint8Array;
+  private readonly speciesNumbers = new Map<string, number>();
   private readonly records: IngestRecord[] = [];
   private readonly problems: IngestProblem[] = [];
   private problemCount = 0;
@@ -28,7 +47,9 @@ export class RowChecker {
   private rowsRead = 0;
 
   constructor(private readonly context: IngestContext) {
-    this.plotsByNumber = new Map(context.plots.map((plot) => [plot.number, plot.treatmentCode]));
+    this.plotIndexes = new Map(context.plots.map((plot, index) => [plot.number, index]));
+    this.stride = context.quadratsPerPlot + 1;
+    this.quadratsWithValues = new Uint8Array(context.plots.length * this.stride);
   }
 
   private report(problem: IngestProblem): void {
@@ -52,7 +73,7 @@ export class RowChecker {
       return;
     }
     if (!this.map) return;
-    if (cells.every((cell) => cell.trim() === "")) return;
+    if (isBlank(cells)) return;
     this.rowsRead += 1;
     if (cells.length > this.headerWidth) {
       this.report({
@@ -69,12 +90,13 @@ export class RowChecker {
       this.report({ severity: "error", code: "unknown-plot", row, column: "plot", message: `Row ${row}: "${(cells[map.plot] ?? "").trim()}" is not a plot number.` });
       return;
     }
-    const treatmentCode = this.plotsByNumber.get(plotNumber);
-    if (treatmentCode === undefined) {
+    const plotIndex = this.plotIndexes.get(plotNumber);
+    if (plotIndex === undefined) {
       this.report({ severity: "error", code: "unknown-plot", row, column: "plot", message: `Row ${row}: plot ${plotNumber} is not in this trial.` });
       return;
     }
     if (map.treatment !== null) {
+      const treatmentCode = this.context.plots[plotIndex].treatmentCode;
       const stated = (cells[map.treatment] ?? "").trim();
       if (stated && stated.toLowerCase() !== treatmentCode.toLowerCase()) {
         this.report({
@@ -96,7 +118,7 @@ export class RowChecker {
     }
     const species = map.species !== null ? (cells[map.species] ?? "").trim().slice(0, 80) : "";
     if (map.format === "wide") {
-      for (const [index, quadrat] of map.quadratColumns) this.acceptValue(cells[index], row, `q${quadrat}`, plotNumber, quadrat, species);
+      for (const [index, quadrat] of map.quadratColumns) this.acceptValue(cells[index], row, `q${quadrat}`, plotNumber, plotIndex, quadrat, species);
       return;
     }
     let quadrat = 1;
@@ -114,15 +136,13 @@ export class RowChecker {
       }
       quadrat = parsed;
     }
-    this.acceptValue(cells[map.value!], row, "value", plotNumber, quadrat, species);
+    this.acceptValue(cells[map.value!], row, "value", plotNumber, plotIndex, quadrat, species);
   }
 
-  private acceptValue(raw: string | undefined, row: number, column: string, plotNumber: number, quadrat: number, species: string): void {
-    // Built only when there is something to report: most rows have nothing to say.
-    const where = () => `plot ${plotNumber}, quadrat ${quadrat}${species ? `, ${species}` : ""}`;
+  private acceptValue(raw: string | undefined, row: number, column: string, plotNumber: number, plotIndex: number, quadrat: number, species: string): void {
     const reading = readNumberCell(raw);
     if (reading.kind === "missing") {
-      this.report({ severity: "warning", code: "no-value", row, column, message: `Row ${row}: no value for ${where()}; it is left out (a lost quadrat).` });
+      this.report({ severity: "warning", code: "no-value", row, column, message: `Row ${row}: no value for ${describeCell(plotNumber, quadrat, species)}; it is left out (a lost quadrat).` });
       return;
     }
     if (reading.kind === "decimal-comma") {
@@ -130,26 +150,31 @@ export class RowChecker {
       return;
     }
     if (reading.kind === "text") {
-      this.report({ severity: "error", code: "not-a-number", row, column, message: `Row ${row}: "${(raw ?? "").trim().slice(0, 40)}" for ${where()} is not a number.` });
+      this.report({ severity: "error", code: "not-a-number", row, column, message: `Row ${row}: "${(raw ?? "").trim().slice(0, 40)}" for ${describeCell(plotNumber, quadrat, species)} is not a number.` });
       return;
     }
     if (reading.value < 0) {
-      this.report({ severity: "error", code: "negative", row, column, message: `Row ${row}: ${reading.value} for ${where()} is negative; counts, weights and ratings cannot be.` });
+      this.report({ severity: "error", code: "negative", row, column, message: `Row ${row}: ${reading.value} for ${describeCell(plotNumber, quadrat, species)} is negative; counts, weights and ratings cannot be.` });
       return;
     }
-    const cell = plotNumber * 64 + quadrat;
-    let bySpecies = this.seen.get(cell);
-    if (!bySpecies) {
-      bySpecies = new Map();
-      this.seen.set(cell, bySpecies);
-    }
+    const slot = plotIndex * this.stride + quadrat;
     const speciesKey = species === "" ? "" : species.toLowerCase();
-    const earlier = bySpecies.get(speciesKey);
-    if (earlier !== undefined) {
-      this.report({ severity: "error", code: "duplicate", row, column, message: `Row ${row}: ${where()} already has a value in row ${earlier}. Keep one of them.` });
+    let speciesNumber = this.speciesNumbers.get(speciesKey);
+    if (speciesNumber === undefined) {
+      speciesNumber = this.speciesNumbers.size;
+      this.speciesNumbers.set(speciesKey, speciesNumber);
+      if (speciesNumber < SPECIES_TABLES) this.seen.push(new Int32Array(this.quadratsWithValues.length));
+    }
+    const table = this.seen[speciesNumber];
+    const overflowKey = speciesNumber * this.quadratsWithValues.length + slot;
+    const earlier = table ? table[slot] : (this.seenOverflow.get(overflowKey) ?? 0);
+    if (earlier !== 0) {
+      this.report({ severity: "error", code: "duplicate", row, column, message: `Row ${row}: ${describeCell(plotNumber, quadrat, species)} already has a value in row ${earlier}. Keep one of them.` });
       return;
     }
-    bySpecies.set(speciesKey, row);
+    if (table) table[slot] = row;
+    else this.seenOverflow.set(overflowKey, row);
+    this.quadratsWithValues[slot] = 1;
     const { plausibleMin, plausibleMax } = this.context;
     if ((plausibleMin !== null && reading.value < plausibleMin) || (plausibleMax !== null && reading.value > plausibleMax)) {
       this.report({
@@ -157,7 +182,7 @@ export class RowChecker {
         code: "implausible",
         row,
         column,
-        message: `Row ${row}: ${reading.value} ${this.context.unit} for ${where()} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
+        message: `Row ${row}: ${reading.value} ${this.context.unit} for ${describeCell(plotNumber, quadrat, species)} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
       });
     }
     this.records.push({ row, plotNumber, quadrat, species, value: reading.value });
@@ -170,12 +195,14 @@ export class RowChecker {
       this.report({ severity: "error", code: "no-values", message: "The file has a header but no values. Fill in the data sheet and upload it again." });
     }
     if (this.map && this.records.length > 0) {
-      const quadratsByPlot = new Map<number, Set<number>>();
-      for (const record of this.records) {
-        if (!quadratsByPlot.has(record.plotNumber)) quadratsByPlot.set(record.plotNumber, new Set());
-        quadratsByPlot.get(record.plotNumber)!.add(record.quadrat);
-      }
-      const missingPlots = [...this.plotsByNumber.keys()].filter((number) => !quadratsByPlot.has(number));
+      const missingPlots: number[] = [];
+      const short: number[] = [];
+      this.context.plots.forEach((plot, index) => {
+        let quadrats = 0;
+        for (let quadrat = 1; quadrat < this.stride; quadrat += 1) quadrats += this.quadratsWithValues[index * this.stride + quadrat];
+        if (quadrats === 0) missingPlots.push(plot.number);
+        else if (quadrats < this.context.quadratsPerPlot) short.push(plot.number);
+      });
       if (missingPlots.length > 0) {
         this.report({
           severity: "warning",
@@ -183,7 +210,6 @@ export class RowChecker {
           message: `No values for plot${missingPlots.length === 1 ? "" : "s"} ${describePlots(missingPlots)}. ${missingPlots.length === 1 ? "It is" : "They are"} analysed as lost plots unless you add them.`,
         });
       }
-      const short = [...quadratsByPlot].filter(([, quadrats]) => quadrats.size < this.context.quadratsPerPlot).map(([number]) => number);
       if (short.length > 0) {
         this.report({
           severity: "warning",

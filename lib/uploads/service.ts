@@ -1,5 +1,6 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
+import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import { AppError, notFound } from "@/lib/errors";
 import { readCsv } from "@/lib/ingest/read-csv";
@@ -103,18 +104,73 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   return result;
 }
 
-function compare(records: IngestRecord[], current: { plotNumber: number; quadrat: number; species: string; value: number }[]): ChangeSummary {
-  const key = (entry: { plotNumber: number; quadrat: number; species: string }) => `${entry.plotNumber}|${entry.quadrat}|${entry.species.toLowerCase()}`;
-  const existing = new Map(current.map((entry) => [key(entry), entry.value]));
+/**
+ * The values in place, keyed by plot, quadrat and species (case aside), for the preview's
+ * change summary. A version never changes once written, so the values current at an
+ * assessment's latest version can be kept: after an upload commits, they are exactly the
+ * file's rows, and the next check of that assessment needs no 100,000-row read.
+ */
+interface CurrentValues {
+  versionId: string;
+  source: readonly { plotNumber: number; quadrat: number; species: string; value: number }[];
+  index?: ValueIndex;
+}
+
+/** Values by species (case aside), then by plot × 64 + quadrat: small-integer keys, no string per value. */
+type ValueIndex = Map<string, Map<number, number>>;
+
+const currentByAssessment = new Map<string, CurrentValues>();
+
+function remember(assessmentId: string, values: CurrentValues): void {
+  currentByAssessment.delete(assessmentId);
+  currentByAssessment.set(assessmentId, values);
+  while (currentByAssessment.size > RECENT_LIMIT) currentByAssessment.delete(currentByAssessment.keys().next().value!);
+}
+
+function indexValues(values: CurrentValues["source"]): ValueIndex {
+  const index: ValueIndex = new Map();
+  for (const entry of values) {
+    const species = entry.species.toLowerCase();
+    let bySlot = index.get(species);
+    if (!bySlot) index.set(species, (bySlot = new Map()));
+    bySlot.set(entry.plotNumber * 64 + entry.quadrat, entry.value);
+  }
+  return index;
+}
+
+async function currentValueIndex(assessmentId: string): Promise<ValueIndex> {
+  const [latest] = await db().query<{ id: string }>(
+    "SELECT id FROM dataset_versions WHERE assessment_id = :assessmentId ORDER BY number DESC LIMIT 1",
+    { replacements: { assessmentId }, type: QueryTypes.SELECT },
+  );
+  if (!latest) return new Map();
+  let current = currentByAssessment.get(assessmentId);
+  if (current?.versionId !== latest.id) {
+    current = { versionId: latest.id, source: await currentRawValues(assessmentId) };
+    remember(assessmentId, current);
+  }
+  current.index ??= indexValues(current.source);
+  return current.index;
+}
+
+function compare(records: IngestRecord[], existing: ValueIndex): ChangeSummary {
   const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
+  let lastSpecies: string | null = null;
+  let bySlot: Map<number, number> | undefined;
   for (const record of records) {
-    const before = existing.get(key(record));
+    if (record.species !== lastSpecies) {
+      lastSpecies = record.species;
+      bySlot = existing.get(record.species.toLowerCase());
+    }
+    const before = bySlot?.get(record.plotNumber * 64 + record.quadrat);
     if (before === undefined) summary.added += 1;
     else if (before === record.value) summary.unchanged += 1;
     else summary.changed += 1;
-    existing.delete(key(record));
   }
-  summary.removed = existing.size;
+  // Keys are unique on both sides, so whatever was not met again is removed.
+  let existingCount = 0;
+  for (const values of existing.values()) existingCount += values.size;
+  summary.removed = existingCount - summary.changed - summary.unchanged;
   return summary;
 }
 
@@ -122,11 +178,13 @@ function compare(records: IngestRecord[], current: { plotNumber: number; quadrat
 export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
   db();
   const upload = await loadUpload(uploadId);
+  // The database reads the values in place while this process parses the file.
+  const current = currentValueIndex(upload.assessmentId);
+  current.catch(() => {});
   const result = await readStoredFile(upload);
   const errors = result.problems.filter((problem) => problem.severity === "error").length;
   const status = errors > 0 ? "refused" : "checked";
   await upload.update({ status, problems: result.problems, rowCount: result.rowsRead, sizeBytes: result.sizeBytes, sha256: result.sha256 });
-  const current = await currentRawValues(upload.assessmentId);
   return {
     uploadId,
     status,
@@ -137,7 +195,7 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
     errors,
     warnings: result.problems.length - errors,
     preview: result.records.slice(0, PREVIEW_ROWS),
-    changes: compare(result.records, current),
+    changes: compare(result.records, await current),
   };
 }
 
@@ -159,6 +217,8 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
     reason,
   });
   recentlyChecked.delete(upload.id);
+  // An upload replaces every plot: the values now in place are exactly the file's rows.
+  remember(upload.assessmentId, { versionId: version.id, source: result.records });
   await notify({ type: "upload-committed", trialId: upload.trialId, assessmentId: upload.assessmentId, versionNumber: version.number, actorId: user.id });
   return version;
 }

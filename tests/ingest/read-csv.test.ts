@@ -65,6 +65,27 @@ describe("reading a data file", () => {
     expect(result.problems.find((p) => p.code === "missing-plot")?.message).toBe("No values for plots 102, 103, 202, 203. They are analysed as lost plots unless you add them.");
   });
 
+  it("tells species apart, case aside, however many a sheet lists", async () => {
+    const species = Array.from({ length: 40 }, (_, index) => `weed${index + 1}`);
+    const file = [
+      "plot,quadrat,species,value",
+      ...species.map((name) => `101,1,${name},1`),
+      "101,1,Weed3,2",
+      "101,1,WEED40,2",
+      "101,2,weed40,2",
+      ...plots.filter((plot) => plot.number !== 101).map((plot) => `${plot.number},1,weed1,1`),
+    ].join("\n");
+    const result = await readCsv(chunks(file), context);
+    expect(result.problems.filter((p) => p.code === "duplicate").map((p) => p.message)).toEqual([
+      "Row 42: plot 101, quadrat 1, Weed3 already has a value in row 4. Keep one of them.",
+      "Row 43: plot 101, quadrat 1, WEED40 already has a value in row 41. Keep one of them.",
+    ]);
+    expect(result.records).toHaveLength(40 + 1 + 5);
+    expect(result.problems.find((p) => p.code === "missing-quadrat")?.message).toBe(
+      "Plots 102, 103, 201, 202, 203 have fewer than 2 quadrats; the plot mean uses the quadrats present.",
+    );
+  });
+
   it("flags a value outside the plausible range but keeps it", async () => {
     const result = await readCsv(chunks("plot,quadrat,value\n101,1,950\n"), context);
     expect(result.records.map((r) => r.value)).toEqual([950]);
