@@ -93,13 +93,12 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
     const unknown = request.values.find((value) => !plotIds.has(value.plotNumber));
     if (unknown) throw new AppError("INVALID_INPUT", `Plot ${unknown.plotNumber} is not in this trial.`);
-    assertOneValueEach(request.values, new Map(plots.map((plot, index) => [plot.number, index])));
 
     const [{ next }] = await sequelize.query<{ next: number }>(
       "SELECT COALESCE(MAX(number), 0) + 1 AS next FROM dataset_versions WHERE assessment_id = :assessmentId",
       { replacements: { assessmentId: request.assessmentId }, type: QueryTypes.SELECT, transaction },
     );
-    const version = await DatasetVersion.create(
+    const creating = DatasetVersion.create(
       {
         assessmentId: request.assessmentId,
         trialId: request.trialId,
@@ -114,13 +113,23 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       },
       { transaction },
     );
+    // Checked while the database writes the version and its sets (a refusal rolls both back):
+    // one turn of the event loop puts the insert on the wire before this thread gets busy.
+    creating.catch(() => {});
+    await new Promise((resolve) => setImmediate(resolve));
+    assertOneValueEach(request.values, new Map(plots.map((plot, index) => [plot.number, index])));
+    const version = await creating;
 
     // The version's insert trigger has closed the earlier sets of the plots it covers.
     const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
       'SELECT COALESCE(sum(row_count), 0)::int AS "rowsReplaced" FROM observation_sets WHERE replaced_in_version_id = :versionId',
       { replacements: { versionId: version.id }, type: QueryTypes.SELECT, transaction },
     );
-    if (request.values.length > 0) await copyValues(clientOf(transaction), request.values, request.assessmentId, version.id, plotIds);
+    if (request.values.length > 0) {
+      // The insert trigger sees the new rows as one table; 100,000 of them would spill past the default 4 MB to disk.
+      await sequelize.query("SET LOCAL work_mem = '32MB'", { transaction });
+      await copyValues(clientOf(transaction), request.values, request.assessmentId, version.id, plotIds);
+    }
     if (request.uploadId) {
       // Inside the same transaction, so a file can never become two versions.
       const [, marked] = (await sequelize.query(

@@ -11,59 +11,67 @@ export interface CopiedValue {
 }
 
 const SIGNATURE = Buffer.from("PGCOPY\n\xff\r\n\0", "latin1");
-const FIELDS = 6;
 const ROWS_PER_CHUNK = 4096;
 
 const uuidBytes = (uuid: string) => Buffer.from(uuid.replace(/-/g, ""), "hex");
+const int16 = (value: number) => Buffer.from([(value >> 8) & 0xff, value & 0xff]);
+const int32 = (value: number) => {
+  const bytes = Buffer.alloc(4);
+  bytes.writeInt32BE(value);
+  return bytes;
+};
 
 /**
  * PostgreSQL's binary COPY format: three uuids a row as 16 bytes each instead of 36
- * characters to parse, which halves the server's work against CSV.
+ * characters to parse, which halves the server's work against CSV. Each row is
+ * [field count][assessment][plot][quadrat][species][value][version], every field after its
+ * byte length; the parts that repeat (everything up to the quadrat, one per plot; the
+ * species with the value's length; the version) are encoded once and copied.
  */
 function* binaryRows(values: readonly CopiedValue[], assessmentId: string, versionId: string, plotIds: Map<number, string>): Generator<Buffer> {
-  const header = Buffer.alloc(SIGNATURE.length + 8);
-  SIGNATURE.copy(header);
-  yield header;
+  yield Buffer.concat([SIGNATURE, int32(0), int32(0)]);
 
-  const assessment = uuidBytes(assessmentId);
-  const version = uuidBytes(versionId);
-  const plots = new Map([...plotIds].map(([number, id]) => [number, uuidBytes(id)]));
-  const speciesBytes = new Map<string, Buffer>();
+  const assessment = Buffer.concat([int16(6), int32(16), uuidBytes(assessmentId), int32(16)]);
+  const quadratLength = int32(4);
+  const plotHeads = new Map([...plotIds].map(([number, id]) => [number, Buffer.concat([assessment, uuidBytes(id), quadratLength])]));
+  const tail = Buffer.concat([int32(16), uuidBytes(versionId)]);
+  const valueLength = int32(8);
+  const speciesParts = new Map<string, Buffer>();
+  const speciesPart = (species: string) => {
+    let part = speciesParts.get(species);
+    if (!part) {
+      const text = Buffer.from(species, "utf8");
+      speciesParts.set(species, (part = Buffer.concat([int32(text.length), text, valueLength])));
+    }
+    return part;
+  };
+
   for (let start = 0; start < values.length; start += ROWS_PER_CHUNK) {
     const end = Math.min(values.length, start + ROWS_PER_CHUNK);
     let size = 0;
-    for (let index = start; index < end; index += 1) {
-      const species = values[index].species;
-      let bytes = speciesBytes.get(species);
-      if (!bytes) speciesBytes.set(species, (bytes = Buffer.from(species, "utf8")));
-      size += 2 + 6 * 4 + 16 + 16 + 4 + bytes.length + 8 + 16;
-    }
+    for (let index = start; index < end; index += 1) size += 46 + 4 + speciesPart(values[index].species).length + 8 + 20;
     const chunk = Buffer.allocUnsafe(size);
+    const view = new DataView(chunk.buffer, chunk.byteOffset, chunk.byteLength);
     let at = 0;
     for (let index = start; index < end; index += 1) {
       const row = values[index];
-      const plot = plots.get(row.plotNumber);
-      if (!plot) throw new Error(`plot ${row.plotNumber} has no id`);
-      const species = speciesBytes.get(row.species)!;
-      at = chunk.writeInt16BE(FIELDS, at);
-      at = chunk.writeInt32BE(16, at);
-      at += assessment.copy(chunk, at);
-      at = chunk.writeInt32BE(16, at);
-      at += plot.copy(chunk, at);
-      at = chunk.writeInt32BE(4, at);
-      at = chunk.writeInt32BE(row.quadrat, at);
-      at = chunk.writeInt32BE(species.length, at);
-      at += species.copy(chunk, at);
-      at = chunk.writeInt32BE(8, at);
-      at = chunk.writeDoubleBE(row.value, at);
-      at = chunk.writeInt32BE(16, at);
-      at += version.copy(chunk, at);
+      const head = plotHeads.get(row.plotNumber);
+      if (!head) throw new Error(`plot ${row.plotNumber} has no id`);
+      chunk.set(head, at);
+      at += head.length;
+      view.setInt32(at, row.quadrat);
+      at += 4;
+      const species = speciesParts.get(row.species)!;
+      chunk.set(species, at);
+      at += species.length;
+      view.setFloat64(at, row.value);
+      at += 8;
+      chunk.set(tail, at);
+      at += tail.length;
     }
     yield chunk;
   }
-  const trailer = Buffer.alloc(2);
-  trailer.writeInt16BE(-1, 0);
-  yield trailer;
+  yield int16(-1);
 }
 
 /** Streams a version's values into observations on the client that holds its transaction. */
