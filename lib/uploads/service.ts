@@ -138,22 +138,43 @@ function indexValues(values: CurrentValues["source"]): ValueIndex {
   return index;
 }
 
-async function currentValueIndex(assessmentId: string): Promise<ValueIndex> {
+async function currentValuesOf(assessmentId: string): Promise<CurrentValues | null> {
   const [latest] = await db().query<{ id: string }>(
     "SELECT id FROM dataset_versions WHERE assessment_id = :assessmentId ORDER BY number DESC LIMIT 1",
     { replacements: { assessmentId }, type: QueryTypes.SELECT },
   );
-  if (!latest) return new Map();
+  if (!latest) return null;
   let current = currentByAssessment.get(assessmentId);
   if (current?.versionId !== latest.id) {
     current = { versionId: latest.id, source: await currentRawValues(assessmentId) };
     remember(assessmentId, current);
   }
-  current.index ??= indexValues(current.source);
-  return current.index;
+  return current;
 }
 
-function compare(records: IngestRecord[], existing: ValueIndex): ChangeSummary {
+const sameCell = (a: { plotNumber: number; quadrat: number; species: string }, b: { plotNumber: number; quadrat: number; species: string }) =>
+  a.plotNumber === b.plotNumber && a.quadrat === b.quadrat && (a.species === b.species || a.species.toLowerCase() === b.species.toLowerCase());
+
+/** A corrected file usually lists the same cells in the same order as the one before: then no lookups are needed. */
+function compareInStep(records: IngestRecord[], source: CurrentValues["source"]): ChangeSummary | null {
+  if (records.length !== source.length) return null;
+  const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
+  for (let index = 0; index < records.length; index += 1) {
+    const record = records[index];
+    const before = source[index];
+    if (!sameCell(record, before)) return null;
+    if (before.value === record.value) summary.unchanged += 1;
+    else summary.changed += 1;
+  }
+  return summary;
+}
+
+function compare(records: IngestRecord[], current: CurrentValues | null): ChangeSummary {
+  if (!current) return { added: records.length, changed: 0, unchanged: 0, removed: 0 };
+  const inStep = compareInStep(records, current.source);
+  if (inStep) return inStep;
+  current.index ??= indexValues(current.source);
+  const existing = current.index;
   const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
   let lastSpecies: string | null = null;
   let bySlot: Map<number, number> | undefined;
@@ -179,7 +200,7 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
   db();
   const upload = await loadUpload(uploadId);
   // The database reads the values in place while this process parses the file.
-  const current = currentValueIndex(upload.assessmentId);
+  const current = currentValuesOf(upload.assessmentId);
   current.catch(() => {});
   const result = await readStoredFile(upload);
   const errors = result.problems.filter((problem) => problem.severity === "error").length;

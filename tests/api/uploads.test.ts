@@ -68,6 +68,14 @@ describe("uploading a data file", () => {
     expect(versions.map((version) => version.number)).toEqual([1, 2]);
   });
 
+  it("counts changes by cell whatever the order of the rows", async () => {
+    const [header, ...rows] = goodFile().replace("\n101,1,,4\n", "\n101,1,,40\n").split("\n");
+    // Version 2 as it stands, upside down, one value changed back, one left out and one quadrat's species named.
+    const reordered = [header, ...rows.reverse().filter((row) => row !== "101,2,,5").map((row) => row.replace("101,1,,40", "101,1,,4").replace("102,1,,4", "102,1,pigweed,4"))];
+    const { body } = await upload(technician, reordered.join("\n"));
+    expect(body.changes).toEqual({ added: 1, changed: 1, unchanged: 21, removed: 2 });
+  });
+
   const badFiles: [string, string | Uint8Array, string][] = [
     ["an empty file", "", "The file is empty"],
     ["a workbook", new Uint8Array([0x50, 0x4b, 0x03, 0x04, 9, 9, 9, 9]), "not a CSV file"],
