@@ -55,9 +55,12 @@ export async function changesIn(versionId: string): Promise<ValueChange[]> {
     `WITH version AS (SELECT id, assessment_id FROM dataset_versions WHERE id = :versionId),
           added AS (SELECT o.plot_id, o.quadrat, o.species, o.value FROM version v
                       JOIN observations o ON o.assessment_id = v.assessment_id AND o.added_in_version_id = v.id),
-          replaced AS (SELECT o.plot_id, o.quadrat, o.species, o.value FROM version v
-                      JOIN observation_sets s ON s.replaced_in_version_id = v.id
-                      JOIN observations o ON o.assessment_id = s.assessment_id AND o.added_in_version_id = s.version_id AND o.plot_id = s.plot_id)
+          replaced_sets AS (SELECT s.assessment_id, s.version_id, s.plot_id FROM version v JOIN observation_sets s ON s.replaced_in_version_id = v.id),
+          -- Version first, then the plots: see migrations/20261202110000-rebuild-current-observations-view.ts.
+          replaced AS (SELECT o.plot_id, o.quadrat, o.species, o.value
+                         FROM (SELECT DISTINCT assessment_id, version_id FROM replaced_sets) earlier
+                         JOIN observations o ON o.assessment_id = earlier.assessment_id AND o.added_in_version_id = earlier.version_id
+                        WHERE EXISTS (SELECT 1 FROM replaced_sets s WHERE s.version_id = o.added_in_version_id AND s.plot_id = o.plot_id))
      SELECT p.number AS "plotNumber", COALESCE(a.quadrat, r.quadrat) AS quadrat, COALESCE(a.species, r.species) AS species,
             r.value AS before, a.value AS after
        FROM added a FULL OUTER JOIN replaced r ON a.plot_id = r.plot_id AND a.quadrat = r.quadrat AND a.species = r.species
