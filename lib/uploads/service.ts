@@ -91,10 +91,13 @@ const recentlyChecked = new Map<string, { etag: string; plotCount: number; resul
 const RECENT_LIMIT = 4;
 
 async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
+  // Storage and the database are asked at once.
+  const contextRead = ingestContextFor(upload.trialId, upload.assessmentId);
+  contextRead.catch(() => {});
   const info = await objectInfo(upload.objectKey);
   if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
   if (info.size !== Number(upload.declaredSizeBytes)) throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
-  const context = await ingestContextFor(upload.trialId, upload.assessmentId);
+  const context = await contextRead;
   const cached = recentlyChecked.get(upload.id);
   if (cached && info.etag && cached.etag === info.etag && cached.plotCount === context.plots.length) return cached.result;
   const result = await readCsv(await readObject(upload.objectKey), context);
