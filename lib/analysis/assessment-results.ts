@@ -6,7 +6,7 @@ import type { Trial } from "@/models";
 import { assessmentResultsSchema, type AnalysisOptions, type AssessmentResults } from "@/lib/validations/analysis";
 import { assessmentRows, type AssessmentRows } from "./analyze-assessment";
 import { buildResults } from "./build-results";
-import { LruCache } from "./lru-cache";
+import { LruCache } from "@/lib/lru-cache";
 
 interface AssessmentStamp {
   id: string;
@@ -29,7 +29,7 @@ export interface TreatmentLine {
  * a change to the trial or its treatments) gives a new key, so stale results are never served.
  * Plot rows are cached separately, so changing options only reruns the engine.
  */
-const resultCache = new LruCache<{ results: AssessmentResults; json: string }>(1000);
+const resultCache = new LruCache<{ results: AssessmentResults; body: Uint8Array }>(1000);
 const rowCache = new LruCache<{ data: AssessmentRows; treatments: TreatmentLine[] }>(200);
 
 export type CacheOutcome = "hit" | "miss";
@@ -59,7 +59,7 @@ export function defaultControl(treatments: TreatmentLine[]): string | undefined 
 }
 
 /** An assessment's results under the given options, from the cache when its data have not changed. */
-export async function assessmentResults(trial: Trial, assessmentId: string, options: AnalysisOptions): Promise<{ results: AssessmentResults; json: string; cache: CacheOutcome }> {
+export async function assessmentResults(trial: Trial, assessmentId: string, options: AnalysisOptions): Promise<{ results: AssessmentResults; body: Uint8Array; cache: CacheOutcome }> {
   const stamp = await stampOf(trial.id, assessmentId);
   const dataKey = [assessmentId, stamp.version, trial.design, trial.updatedAt?.getTime?.() ?? 0, stamp.treatmentsAt ? new Date(stamp.treatmentsAt).getTime() : 0].join("|");
   const key = `${dataKey}|${options.transform}|${options.method}|${options.alpha}|${options.control ?? ""}|${options.reference ?? ""}|${options.margin ?? ""}`;
@@ -83,8 +83,8 @@ export async function assessmentResults(trial: Trial, assessmentId: string, opti
     treatments: loaded.treatments,
     options,
   });
-  // Shaped by the response schema once, when computed; a cache hit sends the same bytes again.
-  const json = JSON.stringify(assessmentResultsSchema.parse(results));
-  resultCache.set(key, { results, json });
-  return { results, json, cache: "miss" };
+  // Shaped by the response schema and encoded once, when computed; a cache hit sends the same bytes again.
+  const body = Buffer.from(JSON.stringify(assessmentResultsSchema.parse(results)));
+  resultCache.set(key, { results, body });
+  return { results, body, cache: "miss" };
 }

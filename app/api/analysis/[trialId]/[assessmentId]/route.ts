@@ -9,7 +9,7 @@ export const GET = route(
   { permission: "analysis:read", params: assessmentAnalysisParams, query: analysisOptionsSchema, trialId: ({ params }) => params.trialId },
   async ({ trial, params, query }) => {
     // The body was shaped by assessmentResultsSchema when the results were computed (lib/analysis/assessment-results.ts).
-    const { json, cache } = await assessmentResults(trial!, params.assessmentId, query);
-    return new Response(json, { headers: { "content-type": "application/json", "x-analysis-cache": cache, "cache-control": "private, no-store" } });
+    const { body, cache } = await assessmentResults(trial!, params.assessmentId, query);
+    return new Response(body as BodyInit, { headers: { "content-type": "application/json", "x-analysis-cache": cache, "cache-control": "private, no-store" } });
   },
 );
