@@ -8,7 +8,7 @@
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { createHash } from "node:crypto";
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { QueryTypes } from "sequelize";
 import { createSequelize } from "@/lib/db/sequelize";
@@ -34,6 +34,24 @@ const autocannon = require("autocannon") as (options: Record<string, unknown>, d
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return Number.NaN;
   return Math.round(sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] * 100) / 100;
+}
+
+/** CPU seconds used so far by every process in a process group (Linux /proc), to report CPU per request. */
+function groupCpuSeconds(groupId: number): number {
+  const ticksPerSecond = 100;
+  let ticks = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
+      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      // After the command name: state, ppid, pgrp, …; utime and stime are fields 14 and 15 of the full line.
+      if (Number(fields[2]) === groupId) ticks += Number(fields[11]) + Number(fields[12]);
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return ticks / ticksPerSecond;
 }
 
 const PORT = 3190;
@@ -122,7 +140,8 @@ async function main(): Promise<void> {
     await prepareDatabase(env.DATABASE_URL, { seed: true });
     build(env);
     log(`starting next start on ${base}`);
-    server = spawn(process.execPath, [path.join(projectRoot, "node_modules/next/dist/bin/next"), "start", "-p", String(PORT), "-H", "127.0.0.1"], {
+    // Served as `npm start` serves it: several workers on one port (scripts/serve-cluster.ts).
+    server = spawn(path.join(projectRoot, "node_modules/.bin/tsx"), [path.join(projectRoot, "scripts/serve-cluster.ts"), "-p", String(PORT), "-H", "127.0.0.1"], {
       cwd: projectRoot,
       env: { ...process.env, ...env, NODE_ENV: "production" },
       stdio: ["ignore", 2, 2],
@@ -158,10 +177,12 @@ async function main(): Promise<void> {
     await warm.arrayBuffer();
     log(`load: ${url} — 20 connections, 20 s`);
     const times: number[] = [];
+    const cpuBefore = groupCpuSeconds(server.pid!);
     const result = await new Promise<AutocannonResult>((resolve, reject) => {
       const instance = autocannon({ url, connections: 20, duration: 20, headers: { cookie } }, (error, outcome) => (error ? reject(error) : resolve(outcome)));
       instance.on("response", (_client, _status, _bytes, responseTime) => times.push(responseTime));
     });
+    log(`server CPU: ${(((groupCpuSeconds(server.pid!) - cpuBefore) * 1000) / times.length).toFixed(2)} ms per request over ${times.length} requests`);
     stop();
     times.sort((a, b) => a - b);
     process.stdout.write(
