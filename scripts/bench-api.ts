@@ -8,7 +8,7 @@
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { createHash } from "node:crypto";
-import { existsSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { QueryTypes } from "sequelize";
 import { createSequelize } from "@/lib/db/sequelize";
@@ -16,6 +16,7 @@ import { DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { prepareDatabase } from "./lib/database";
 import { appEnvironment, POSTGRES_PORT, projectRoot } from "./lib/environment";
 import { ensureCluster, psql, recreateDatabase } from "./lib/postgres";
+import { groupCpuSeconds } from "./lib/process-cpu";
 
 // autocannon ships no types; only the parts used here.
 interface AutocannonResult {
@@ -34,24 +35,6 @@ const autocannon = require("autocannon") as (options: Record<string, unknown>, d
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return Number.NaN;
   return Math.round(sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] * 100) / 100;
-}
-
-/** CPU seconds used so far by every process in a process group (Linux /proc), to report CPU per request. */
-function groupCpuSeconds(groupId: number): number {
-  const ticksPerSecond = 100;
-  let ticks = 0;
-  for (const entry of readdirSync("/proc")) {
-    if (!/^\d+$/.test(entry)) continue;
-    try {
-      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
-      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-      // After the command name: state, ppid, pgrp, …; utime and stime are fields 14 and 15 of the full line.
-      if (Number(fields[2]) === groupId) ticks += Number(fields[11]) + Number(fields[12]);
-    } catch {
-      // the process ended while we looked
-    }
-  }
-  return ticks / ticksPerSecond;
 }
 
 const PORT = 3190;

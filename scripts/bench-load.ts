@@ -5,10 +5,15 @@
  * Starts its own stack (test slot 7), cleans up, and prints one JSON object on the last line
  * (contract: benchmarks.md).
  */
+import os from "node:os";
+
 process.env.HOEBENCH_TEST_SLOT = process.env.HOEBENCH_TEST_SLOT ?? "7";
 
 const CLIENTS = Number(process.env.BENCH_CLIENTS ?? 50);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 60);
+// Each client is a person: after an answer comes back they look at it before the next action.
+// One second on average (0.5–1.5 s) is far quicker than people read a page; 0 hammers the server.
+const THINK_MS = Number(process.env.BENCH_THINK_MS ?? 1000);
 const log = (message: string) => process.stderr.write(`[bench:load] ${message}\n`);
 
 type RouteName = "sign-in" | "trial list" | "trial page" | "results api" | "library search" | "csv upload";
@@ -27,11 +32,13 @@ async function main(): Promise<void> {
   const { bringUp, startFakes, buildApp, serveApp } = await import("./lib/stack");
   const { stopChildren, shutdown } = await import("./lib/processes");
   const { portsFor } = await import("./lib/environment");
+  const { commandCpuSeconds, groupCpuSeconds } = await import("./lib/process-cpu");
   const env = await bringUp("test");
   Object.assign(process.env, env);
   await startFakes("test", env);
   buildApp(env);
-  await serveApp("test", env);
+  // Served as `npm start` serves it, one worker per core.
+  const server = await serveApp("test", env, { workers: Math.min(4, os.availableParallelism()) });
   const base = `http://127.0.0.1:${portsFor("test").app}`;
 
   const { QueryTypes } = await import("sequelize");
@@ -79,7 +86,10 @@ async function main(): Promise<void> {
     return [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
   }
 
+  // BENCH_ONLY=<route name> drives one route alone, to see what each costs.
+  const only = process.env.BENCH_ONLY as RouteName | undefined;
   const pick = (random: number): RouteName => {
+    if (only) return only;
     const total = mix.reduce((sum, [, weight]) => sum + weight, 0);
     let point = random * total;
     for (const [name, weight] of mix) if ((point -= weight) < 0) return name;
@@ -133,6 +143,8 @@ async function main(): Promise<void> {
   const deadline = Date.now() + SECONDS * 1000;
   log(`${CLIENTS} clients for ${SECONDS} s`);
   const started = performance.now();
+  const serverCpuBefore = groupCpuSeconds(server.pid!);
+  const databaseCpuBefore = commandCpuSeconds("postgres");
   await Promise.all(
     cookies.map(async (cookie) => {
       while (Date.now() < deadline) {
@@ -146,21 +158,27 @@ async function main(): Promise<void> {
         }
         times.get(route)!.push(performance.now() - begin);
         requests += 1;
+        if (THINK_MS > 0) await new Promise((resolve) => setTimeout(resolve, THINK_MS * (0.5 + Math.random())));
       }
     }),
   );
   const elapsed = (performance.now() - started) / 1000;
+  const perRequest = (seconds: number) => ((seconds * 1000) / requests).toFixed(2);
+  log(`CPU per request: app ${perRequest(groupCpuSeconds(server.pid!) - serverCpuBefore)} ms, PostgreSQL ${perRequest(commandCpuSeconds("postgres") - databaseCpuBefore)} ms (${requests} requests)`);
   await sequelize.query("DELETE FROM trials WHERE id = :id", { replacements: { id: trial.id } });
   await sequelize.query("DELETE FROM sites WHERE id = :id", { replacements: { id: site.id } });
   await sequelize.close();
+  const serverStopped = new Promise((resolve) => server.once("exit", resolve));
   stopChildren();
+  // Let the app finish shutting down (and write any profile it was asked for) before the database goes.
+  await Promise.race([serverStopped, new Promise((resolve) => setTimeout(resolve, 10_000))]);
   const routes = Object.fromEntries(
     [...times].map(([name, list]) => {
       const sorted = [...list].sort((a, b) => a - b);
       return [name, { p50Ms: percentile(sorted, 50), p95Ms: percentile(sorted, 95), p99Ms: percentile(sorted, 99), requests: list.length }];
     }),
   );
-  process.stdout.write(`${JSON.stringify({ requestsPerSecond: Math.round((requests / elapsed) * 10) / 10, errors, non2xx, routes })}\n`);
+  process.stdout.write(`${JSON.stringify({ requestsPerSecond: Math.round((requests / elapsed) * 10) / 10, errors, non2xx, clients: CLIENTS, seconds: SECONDS, thinkTimeMs: THINK_MS, routes })}\n`);
   shutdown(0);
 }
 

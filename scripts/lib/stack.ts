@@ -4,7 +4,7 @@
  */
 import { mkdirSync, rmSync } from "node:fs";
 import path from "node:path";
-import { spawnSync } from "node:child_process";
+import { spawnSync, type ChildProcess } from "node:child_process";
 import { ensureCluster, ensureDatabase, recreateDatabase } from "./postgres";
 import { prepareDatabase } from "./database";
 import { appEnvironment, databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName, type Mode } from "./environment";
@@ -42,12 +42,25 @@ export function buildApp(env: Record<string, string>): void {
   if (result.status !== 0) throw new Error("next build failed");
 }
 
-export async function serveApp(mode: "start" | "dev" | "test", env: Record<string, string>): Promise<void> {
+/**
+ * Serves the app: `next dev` for dev; otherwise the production build through
+ * scripts/serve-cluster.ts, one worker per core. Test runs use one worker unless told
+ * otherwise, so a suite that checks a per-process cache sees the same process each time.
+ */
+export async function serveApp(mode: "start" | "dev" | "test", env: Record<string, string>, options: { workers?: number } = {}): Promise<ChildProcess> {
   const port = portsFor(mode).app;
   if (await portOpen(port)) throw new Error(`port ${port} is taken; is Hoebench already running? Stop it first.`);
-  const command = mode === "dev" ? "dev" : "start";
-  startChild("the app", process.execPath, [nextBin, command, "-p", String(port), "-H", "127.0.0.1"], { ...env, NODE_ENV: mode === "dev" ? "development" : "production" }, projectRoot);
+  const listen = ["-p", String(port), "-H", "127.0.0.1"];
+  let child: ChildProcess;
+  if (mode === "dev") {
+    child = startChild("the app", process.execPath, [nextBin, "dev", ...listen], { ...env, NODE_ENV: "development" }, projectRoot);
+  } else {
+    const workers = options.workers ?? (mode === "test" ? 1 : undefined);
+    const workerEnv: Record<string, string> = workers ? { HOEBENCH_APP_WORKERS: String(workers) } : {};
+    child = startChild("the app", tsxBin, [path.join(projectRoot, "scripts/serve-cluster.ts"), ...listen], { ...env, ...workerEnv, NODE_ENV: "production" }, projectRoot);
+  }
   await waitFor("the app", () => httpOk(`http://127.0.0.1:${port}/api/health`), mode === "dev" ? 180_000 : 60_000);
+  return child;
 }
 
 export async function bringUp(mode: Mode, database = databaseFor(mode)): Promise<Record<string, string>> {

@@ -1,0 +1,37 @@
+import { readdirSync, readFileSync } from "node:fs";
+
+/** CPU seconds used so far by every process in a process group (Linux /proc), to report CPU per request. */
+export function groupCpuSeconds(groupId: number): number {
+  const ticksPerSecond = 100;
+  let ticks = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
+      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      // After the command name: state, ppid, pgrp, …; utime and stime are fields 14 and 15 of the full line.
+      if (Number(fields[2]) === groupId) ticks += Number(fields[11]) + Number(fields[12]);
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return ticks / ticksPerSecond;
+}
+
+
+/** CPU seconds used so far by every process whose command name is `command` (e.g. "postgres"). */
+export function commandCpuSeconds(command: string): number {
+  let ticks = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
+      if (stat.slice(stat.indexOf("(") + 1, stat.lastIndexOf(")")) !== command) continue;
+      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      ticks += Number(fields[11]) + Number(fields[12]);
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return ticks / 100;
+}
