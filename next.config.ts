@@ -6,7 +6,7 @@ const csp = contentSecurityPolicy({ storageEndpoint: process.env.S3_ENDPOINT ?? 
 
 const nextConfig: NextConfig = {
   // Sequelize loads its dialect at run time; bundling it breaks that look-up.
-  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "bcryptjs", "nodemailer", "s3rver", "pdfkit", "svg-to-pdfkit"],
+  serverExternalPackages: ["sequelize", "pg", "pg-hstore", "bcrypt", "nodemailer", "s3rver", "pdfkit", "svg-to-pdfkit"],
   // Tests build into their own folder so `npm test` never disturbs a running `npm start`.
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   poweredByHeader: false,
