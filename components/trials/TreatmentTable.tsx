@@ -4,8 +4,14 @@ import type { TreatmentRecord } from "@/lib/data/treatments";
 import { cautionsFor } from "@/lib/safety/cautions";
 import { categoryNames } from "@/lib/trials/labels";
 
+// toLocaleString with options builds a new formatter per call; these are built once.
+const formatters = new Map<number, Intl.NumberFormat>();
+
 function amount(value: number | null, unit: string, digits = 1): string {
-  return value === null ? "not given" : `${value.toLocaleString("en", { maximumFractionDigits: digits })} ${unit}`;
+  if (value === null) return "not given";
+  let formatter = formatters.get(digits);
+  if (!formatter) formatters.set(digits, (formatter = new Intl.NumberFormat("en", { maximumFractionDigits: digits })));
+  return `${formatter.format(value)} ${unit}`;
 }
 
 /** The treatment list as cards that read on a phone, each chemical, thermal or machine treatment with its cautions. */

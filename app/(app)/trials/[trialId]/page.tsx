@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { PlotMap } from "@/components/field/PlotMap";
+import { PlotMapFrame } from "@/components/field/PlotMapFrame";
 import { AssessmentSchedule } from "@/components/trials/AssessmentSchedule";
 import { RandomizeButton } from "@/components/trials/RandomizeButton";
 import { StatusPanel } from "@/components/trials/StatusPanel";
@@ -82,9 +82,16 @@ export default async function TrialPage({ params }: { params: Promise<{ trialId:
               )}
             </div>
             {plan.plots.length > 0 ? (
-              <div className="overflow-x-auto rounded border border-soil-200 bg-white p-2">
-                <PlotMap title={plan.title} plots={plan.plots} treatments={plan.treatments} plotLengthM={plan.plotLengthM} plotWidthM={plan.plotWidthM} design={plan.design} serpentine={plan.serpentine} />
-              </div>
+              <PlotMapFrame
+                className="overflow-x-auto rounded border border-soil-200 bg-white p-2"
+                title={plan.title}
+                plots={plan.plots}
+                treatments={plan.treatments}
+                plotLengthM={plan.plotLengthM}
+                plotWidthM={plan.plotWidthM}
+                design={plan.design}
+                serpentine={plan.serpentine}
+              />
             ) : (
               <p className="rounded border border-dashed border-soil-200 bg-white p-4 text-soil-700">No plots laid out yet.</p>
             )}

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { PlotMap } from "@/components/field/PlotMap";
+import { PlotMapFrame } from "@/components/field/PlotMapFrame";
 import { Cautions } from "@/components/safety/Cautions";
 import { PrintButton } from "@/components/trials/PrintButton";
 import { RandomizeButton } from "@/components/trials/RandomizeButton";
@@ -46,9 +46,18 @@ export default async function PlotMapPage({ params }: { params: Promise<{ trialI
             </a>
             {canRandomize && <RandomizeButton trialId={trial.id} hasLayout />}
           </div>
-          <div className="overflow-x-auto rounded border border-soil-200 bg-white p-2 print:border-0 print:p-0" data-testid="plot-map">
-            <PlotMap title={plan.title} plots={plan.plots} treatments={plan.treatments} plotLengthM={plan.plotLengthM} plotWidthM={plan.plotWidthM} design={plan.design} serpentine={plan.serpentine} showWalkingOrder={plan.serpentine} />
-          </div>
+          <PlotMapFrame
+            className="overflow-x-auto rounded border border-soil-200 bg-white p-2 print:border-0 print:p-0"
+            testId="plot-map"
+            title={plan.title}
+            plots={plan.plots}
+            treatments={plan.treatments}
+            plotLengthM={plan.plotLengthM}
+            plotWidthM={plan.plotWidthM}
+            design={plan.design}
+            serpentine={plan.serpentine}
+            showWalkingOrder={plan.serpentine}
+          />
           {plan.cautions.length > 0 && (
             <div className="mt-4 break-inside-avoid">
               <Cautions cautions={plan.cautions} />
