@@ -22,6 +22,8 @@ export class Trial extends Model<InferAttributes<Trial>, InferCreationAttributes
   declare serpentine: CreationOptional<boolean>;
   declare status: CreationOptional<TrialStatus>;
   declare ownerId: string;
+  /** Moves (by trigger) whenever data an analysis reads change; keys cached results. */
+  declare dataRevision: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -45,6 +47,7 @@ export class Trial extends Model<InferAttributes<Trial>, InferCreationAttributes
         serpentine: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "draft" },
         ownerId: { type: DataTypes.UUID, allowNull: false },
+        dataRevision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -25,9 +25,10 @@ export interface TreatmentLine {
 }
 
 /*
- * Results are cached per process by data version: a new version of the assessment's data (or
- * a change to the trial or its treatments) gives a new key, so stale results are never served.
- * Plot rows are cached separately, so changing options only reruns the engine.
+ * Results are cached per process under the trial's data revision: a new version of any of its
+ * data, or a change to the trial, its treatments, assessments or plots, gives a new key, so
+ * stale results are never served. Plot rows are cached separately by the assessment's own
+ * version, so changing options, or a change elsewhere in the trial, only reruns the engine.
  */
 const resultCache = new LruCache<{ results: AssessmentResults; body: Uint8Array }>(1000);
 const rowCache = new LruCache<{ data: AssessmentRows; treatments: TreatmentLine[] }>(200);
@@ -60,12 +61,16 @@ export function defaultControl(treatments: TreatmentLine[]): string | undefined 
 
 /** An assessment's results under the given options, from the cache when its data have not changed. */
 export async function assessmentResults(trial: Trial, assessmentId: string, options: AnalysisOptions): Promise<{ results: AssessmentResults; body: Uint8Array; cache: CacheOutcome }> {
-  const stamp = await stampOf(trial.id, assessmentId);
-  const dataKey = [assessmentId, stamp.version, trial.design, trial.updatedAt?.getTime?.() ?? 0, stamp.treatmentsAt ? new Date(stamp.treatmentsAt).getTime() : 0].join("|");
-  const key = `${dataKey}|${options.transform}|${options.method}|${options.alpha}|${options.control ?? ""}|${options.reference ?? ""}|${options.margin ?? ""}`;
+  // The trial's data revision moves with any version, treatment, assessment or plot change
+  // (database triggers), so a hit needs no query beyond the trial row already loaded.
+  const trialKey = [trial.id, trial.dataRevision, trial.design, trial.updatedAt?.getTime?.() ?? 0].join("|");
+  const optionsKey = [options.transform, options.method, options.alpha, options.control ?? "", options.reference ?? "", options.margin ?? ""].join("|");
+  const key = `${trialKey}|${assessmentId}|${optionsKey}`;
   const cached = resultCache.get(key);
   if (cached) return { ...cached, cache: "hit" };
 
+  const stamp = await stampOf(trial.id, assessmentId);
+  const dataKey = [assessmentId, stamp.version, trial.design, trial.updatedAt?.getTime?.() ?? 0, stamp.treatmentsAt ? new Date(stamp.treatmentsAt).getTime() : 0].join("|");
   let loaded = rowCache.get(dataKey);
   if (!loaded) {
     const [data, treatments] = await Promise.all([

@@ -103,6 +103,13 @@ describe("the analysis API", () => {
     expect(body.dataVersion).toBe(2);
     expect(body.treatmentTest.significant).toBe(true);
     expect(new Set(body.means.map((mean: { letters: string }) => mean.letters)).size).toBe(3);
+
+    // A treatment renamed after the results were cached: the next answer carries the new name.
+    expect((await researcher.request(url)).headers.get("x-analysis-cache")).toBe("hit");
+    await fixture.treatments[0].update({ name: "Renamed hoeing" });
+    const renamed = await researcher.request(url);
+    expect(renamed.headers.get("x-analysis-cache")).toBe("miss");
+    expect((await renamed.json()).means.map((mean: { name: string }) => mean.name)).toContain("Renamed hoeing");
   });
 
   it("answers 404 to a grower and to a reviewer of another trial, 422 to bad options", async () => {
