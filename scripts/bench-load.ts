@@ -5,6 +5,7 @@
  * Starts its own stack (test slot 7), cleans up, and prints one JSON object on the last line
  * (contract: benchmarks.md).
  */
+import { writeFileSync } from "node:fs";
 import os from "node:os";
 
 process.env.HOEBENCH_TEST_SLOT = process.env.HOEBENCH_TEST_SLOT ?? "7";
@@ -32,13 +33,13 @@ async function main(): Promise<void> {
   const { bringUp, startFakes, buildApp, serveApp } = await import("./lib/stack");
   const { stopChildren, shutdown } = await import("./lib/processes");
   const { portsFor } = await import("./lib/environment");
-  const { commandCpuSeconds, groupCpuSeconds } = await import("./lib/process-cpu");
+  const { commandCpuSeconds, groupCpuSeconds, machineTicks } = await import("./lib/process-cpu");
   const env = await bringUp("test");
   Object.assign(process.env, env);
   await startFakes("test", env);
   buildApp(env);
   // Served as `npm start` serves it, one worker per core.
-  const server = await serveApp("test", env, { workers: Math.min(4, os.availableParallelism()) });
+  const server = await serveApp("test", env, { workers: Number(process.env.HOEBENCH_APP_WORKERS) || Math.min(4, os.availableParallelism()) });
   const base = `http://127.0.0.1:${portsFor("test").app}`;
 
   const { QueryTypes } = await import("sequelize");
@@ -140,13 +141,20 @@ async function main(): Promise<void> {
   let errors = 0;
   let non2xx = 0;
   let requests = 0;
+  // Untimed warm-up: each route a few times, so every app worker has loaded its code before the clock starts.
+  for (const [route] of mix) for (let round = 0; round < 4; round += 1) if (!only || route === only) await once(route, cookies[0]);
   const deadline = Date.now() + SECONDS * 1000;
   log(`${CLIENTS} clients for ${SECONDS} s`);
   const started = performance.now();
+  // BENCH_TRACE=<file> keeps every request's route, start and duration, to find what slows the others.
+  const trace: [RouteName, number, number][] | undefined = process.env.BENCH_TRACE ? [] : undefined;
   const serverCpuBefore = groupCpuSeconds(server.pid!);
   const databaseCpuBefore = commandCpuSeconds("postgres");
+  const machineBefore = machineTicks();
   await Promise.all(
     cookies.map(async (cookie) => {
+      // People do not all click at the same instant: each starts after a first look of its own.
+      if (THINK_MS > 0) await new Promise((resolve) => setTimeout(resolve, THINK_MS * 1.5 * Math.random()));
       while (Date.now() < deadline) {
         const route = pick(Math.random());
         const begin = performance.now();
@@ -157,13 +165,17 @@ async function main(): Promise<void> {
           errors += 1;
         }
         times.get(route)!.push(performance.now() - begin);
+        trace?.push([route, Math.round(begin - started), Math.round(performance.now() - begin)]);
         requests += 1;
         if (THINK_MS > 0) await new Promise((resolve) => setTimeout(resolve, THINK_MS * (0.5 + Math.random())));
       }
     }),
   );
   const elapsed = (performance.now() - started) / 1000;
+  if (trace) writeFileSync(process.env.BENCH_TRACE!, JSON.stringify(trace));
   const perRequest = (seconds: number) => ((seconds * 1000) / requests).toFixed(2);
+  const machineAfter = machineTicks();
+  log(`machine busy ${(((machineAfter.busy - machineBefore.busy) / (machineAfter.total - machineBefore.total)) * 100).toFixed(0)}% of ${os.availableParallelism()} cores; this driver used ${(process.cpuUsage().user / 1e6 + process.cpuUsage().system / 1e6).toFixed(1)} s of CPU in all`);
   log(`CPU per request: app ${perRequest(groupCpuSeconds(server.pid!) - serverCpuBefore)} ms, PostgreSQL ${perRequest(commandCpuSeconds("postgres") - databaseCpuBefore)} ms (${requests} requests)`);
   await sequelize.query("DELETE FROM trials WHERE id = :id", { replacements: { id: trial.id } });
   await sequelize.query("DELETE FROM sites WHERE id = :id", { replacements: { id: site.id } });

@@ -24,7 +24,9 @@ let exitCode = 0;
 const restarts: number[] = [];
 
 // Workers are plain node running Next's own CLI, without this script's TypeScript loader.
-const workerFlags = (process.env.HOEBENCH_WORKER_NODE_FLAGS ?? "").split(" ").filter(Boolean);
+// A larger young generation: server rendering makes many short-lived objects, and the default
+// semi-space had the collector running several times per page.
+const workerFlags = ["--max-semi-space-size=64", ...(process.env.HOEBENCH_WORKER_NODE_FLAGS ?? "").split(" ").filter(Boolean)];
 cluster.setupPrimary({ exec: nextBin, args: ["start", ...process.argv.slice(2)], execArgv: workerFlags });
 
 function fork(): void {

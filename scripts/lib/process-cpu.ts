@@ -35,3 +35,11 @@ export function commandCpuSeconds(command: string): number {
   }
   return ticks / 100;
 }
+
+/** Busy and total CPU ticks of the whole machine so far (Linux /proc/stat), for a busy share over an interval. */
+export function machineTicks(): { busy: number; total: number } {
+  const fields = readFileSync("/proc/stat", "utf8").split("\n")[0].trim().split(/\s+/).slice(1).map(Number);
+  const total = fields.reduce((sum, value) => sum + value, 0);
+  const idle = fields[3] + (fields[4] ?? 0);
+  return { busy: total - idle, total };
+}
