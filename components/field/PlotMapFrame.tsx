@@ -1,5 +1,18 @@
+import { LruCache } from "@/lib/lru-cache";
 import type { PlotMapProps } from "@/lib/layout/types";
+import type { Trial } from "@/models";
 import { renderPlotMapSvg } from "./PlotMap";
+
+// Built markup by trial state: the map changes only when the trial or its plots and treatments do.
+const builtMaps = new LruCache<string>(200);
+
+/**
+ * What a trial's map depends on: the trial row (title, plot size, design, numbering) and its
+ * data revision, which database triggers move on any plot or treatment change.
+ */
+export function plotMapCacheKey(trial: Trial, variant: string): string {
+  return [trial.id, trial.dataRevision, trial.updatedAt?.getTime?.() ?? 0, variant].join("|");
+}
 
 /**
  * A frame holding the plot map as ready-made SVG markup. The map is a few hundred SVG
@@ -8,6 +21,8 @@ import { renderPlotMapSvg } from "./PlotMap";
  * from renderStaticMarkup, which escapes every text and attribute as React does (tested
  * against renderToStaticMarkup).
  */
-export function PlotMapFrame({ className, testId, ...props }: PlotMapProps & { className: string; testId?: string }) {
-  return <div className={className} data-testid={testId} dangerouslySetInnerHTML={{ __html: renderPlotMapSvg(props) }} />;
+export function PlotMapFrame({ cacheKey, className, testId, ...props }: PlotMapProps & { cacheKey: string; className: string; testId?: string }) {
+  let markup = builtMaps.get(cacheKey);
+  if (markup === undefined) builtMaps.set(cacheKey, (markup = renderPlotMapSvg(props)));
+  return <div className={className} data-testid={testId} dangerouslySetInnerHTML={{ __html: markup }} />;
 }

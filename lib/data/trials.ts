@@ -1,5 +1,5 @@
 import "server-only";
-import { Op, type WhereOptions } from "sequelize";
+import { Op, QueryTypes, type WhereOptions } from "sequelize";
 import { z } from "zod";
 import type { SessionUser } from "@/lib/auth/session";
 import { db } from "@/lib/db/sequelize";
@@ -136,14 +136,12 @@ export const teamMemberSchema = z.object({
 export type TeamMember = z.infer<typeof teamMemberSchema>;
 
 export async function teamOf(trialId: string): Promise<TeamMember[]> {
-  db();
-  const memberships = await Membership.findAll({ where: { trialId }, include: [{ model: User, as: "user", attributes: ["name", "email"] }] });
-  return memberships
-    .map((membership) => {
-      const user = (membership as Membership & { user: User }).user;
-      return teamMemberSchema.parse({ userId: membership.userId, role: membership.role, name: user.name, email: user.email });
-    })
-    .sort((a, b) => a.role.localeCompare(b.role) || a.name.localeCompare(b.name));
+  // A plain join: the trial page asks on every view, and the ORM's include was the costlier path.
+  const members = await db().query<TeamMember>(
+    `SELECT m.user_id AS "userId", m.role, u.name, u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.trial_id = :trialId`,
+    { replacements: { trialId }, type: QueryTypes.SELECT },
+  );
+  return members.map((member) => teamMemberSchema.parse(member)).sort((a, b) => a.role.localeCompare(b.role) || a.name.localeCompare(b.name));
 }
 
 /** People who can join a team: active technicians and reviewers. */

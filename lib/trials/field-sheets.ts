@@ -32,8 +32,9 @@ export interface FieldPlan {
   cautions: string[];
 }
 
-export async function fieldPlan(trial: Trial): Promise<FieldPlan> {
-  const [plots, treatments] = await Promise.all([plotsOf(trial.id), treatmentsOf(trial.id)]);
+/** The plan of a trial's field; pass treatments already loaded for the same request to save a query. */
+export async function fieldPlan(trial: Trial, loadedTreatments?: Promise<TreatmentRecord[]>): Promise<FieldPlan> {
+  const [plots, treatments] = await Promise.all([plotsOf(trial.id), loadedTreatments ?? treatmentsOf(trial.id)]);
   const byId = new Map(treatments.map((treatment) => [treatment.id, treatment]));
   return {
     title: trial.title,

@@ -69,6 +69,8 @@ test("a grower registers, is signed in, and cannot register the same address twi
   await expect(page.getByTestId("signed-in-as")).toHaveText("Mara Stubblefield · Grower");
 
   await page.getByRole("button", { name: "Sign out" }).click();
+  // Sign-out ends with its own navigation to the sign-in page; going elsewhere before it lands races it.
+  await expect(page).toHaveURL(/\/signin/);
   await page.goto("/register");
   await page.getByLabel("Name").fill("Mara Stubblefield");
   await page.getByLabel("E-mail").fill(email);

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { PlotMapFrame } from "@/components/field/PlotMapFrame";
+import { PlotMapFrame, plotMapCacheKey } from "@/components/field/PlotMapFrame";
 import { AssessmentSchedule } from "@/components/trials/AssessmentSchedule";
 import { RandomizeButton } from "@/components/trials/RandomizeButton";
 import { StatusPanel } from "@/components/trials/StatusPanel";
@@ -32,12 +32,13 @@ const statusText = {
 export default async function TrialPage({ params }: { params: Promise<{ trialId: string }> }) {
   const { trialId } = await params;
   const { user, trial } = await trialForPage(trialId);
+  const loadingTreatments = treatmentsOf(trial.id);
   const [overview, treatments, assessments, team, plan, readiness, observed] = await Promise.all([
     trialOverview(trial),
-    treatmentsOf(trial.id),
+    loadingTreatments,
     assessmentsOf(trial.id),
     teamOf(trial.id),
-    fieldPlan(trial),
+    fieldPlan(trial, loadingTreatments),
     readinessOf(trial.id),
     hasObservations(trial.id),
   ]);
@@ -83,6 +84,7 @@ export default async function TrialPage({ params }: { params: Promise<{ trialId:
             </div>
             {plan.plots.length > 0 ? (
               <PlotMapFrame
+                cacheKey={plotMapCacheKey(trial, "overview")}
                 className="overflow-x-auto rounded border border-soil-200 bg-white p-2"
                 title={plan.title}
                 plots={plan.plots}

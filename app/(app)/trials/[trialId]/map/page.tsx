@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { PlotMapFrame } from "@/components/field/PlotMapFrame";
+import { PlotMapFrame, plotMapCacheKey } from "@/components/field/PlotMapFrame";
 import { Cautions } from "@/components/safety/Cautions";
 import { PrintButton } from "@/components/trials/PrintButton";
 import { RandomizeButton } from "@/components/trials/RandomizeButton";
@@ -47,6 +47,7 @@ export default async function PlotMapPage({ params }: { params: Promise<{ trialI
             {canRandomize && <RandomizeButton trialId={trial.id} hasLayout />}
           </div>
           <PlotMapFrame
+            cacheKey={plotMapCacheKey(trial, "printable")}
             className="overflow-x-auto rounded border border-soil-200 bg-white p-2 print:border-0 print:p-0"
             testId="plot-map"
             title={plan.title}
