@@ -5,27 +5,9 @@ import { AnovaTable } from "./AnovaTable";
 import { MeansTable } from "./MeansTable";
 import { BoxChart, EquivalenceChart, MeansChart, QqChart, ResidualChart } from "@/components/charts/ResultCharts";
 import { callApi, type ApiFailure } from "@/lib/client/api";
+import { alphaChoices, resultsQueryOf, type ResultsOptionsState } from "@/lib/analysis/results-options";
 import { transformLabels, transforms, type AssessmentResults } from "@/lib/validations/analysis";
 import { num, pText } from "./format";
-
-export interface ResultsOptionsState {
-  transform: (typeof transforms)[number];
-  method: "lsd" | "tukey";
-  alpha: string;
-  control: string;
-  reference: string;
-  margin: string;
-}
-
-function queryOf(options: ResultsOptionsState): string {
-  const query = new URLSearchParams({ transform: options.transform, method: options.method, alpha: options.alpha });
-  if (options.control) query.set("control", options.control);
-  if (options.reference && Number(options.margin) > 0) {
-    query.set("reference", options.reference);
-    query.set("margin", options.margin);
-  }
-  return query.toString();
-}
 
 const selectClass = "mt-1 block w-full rounded border border-soil-300 bg-white px-2 py-1.5 text-sm";
 
@@ -39,7 +21,12 @@ export function ResultsView({ trialId, assessmentId, treatments, initial }: { tr
   const [error, setError] = useState<ApiFailure | null>(null);
   const [loading, setLoading] = useState(true);
   const request = useRef(0);
-  const query = queryOf(options);
+  const query = resultsQueryOf(options);
+
+  // The address follows the options, so a reload or a shared link shows the same analysis.
+  useEffect(() => {
+    if (window.location.search !== `?${query}`) window.history.replaceState(null, "", `?${query}`);
+  }, [query]);
 
   useEffect(() => {
     const id = ++request.current;
@@ -79,7 +66,7 @@ export function ResultsView({ trialId, assessmentId, treatments, initial }: { tr
         <label className="text-sm">
           Alpha
           <select className={selectClass} value={options.alpha} onChange={set("alpha")}>
-            {["0.01", "0.05", "0.1"].map((alpha) => (
+            {alphaChoices.map((alpha) => (
               <option key={alpha} value={alpha}>{alpha}</option>
             ))}
           </select>

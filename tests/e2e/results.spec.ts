@@ -39,6 +39,11 @@ test("a researcher reads an assessment's tables, letters and charts and changes 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.reload();
   await expect(page.getByTestId("anova-table")).toBeVisible();
+  // The options live in the address, so the reload shows the same analysis.
+  await expect(page).toHaveURL(/method=tukey.*reference=HH&margin=1\.5/);
+  await expect(page.getByLabel("Mean separation")).toHaveValue("tukey");
+  await expect(page.getByRole("combobox", { name: /^Transform/ })).toHaveValue("sqrt");
+  await expect(page.getByTestId("equivalence")).toContainText("90% interval");
   await expect(page.locator(".js-plotly-plot").first()).toBeVisible({ timeout: 30_000 });
   const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
   expect(overflow).toBeLessThanOrEqual(1);

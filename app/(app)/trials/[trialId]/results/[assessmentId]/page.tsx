@@ -5,13 +5,20 @@ import { ResultsView } from "@/components/results/ResultsView";
 import { TrialHeading } from "@/components/trials/TrialHeading";
 import { defaultControl, treatmentsOf } from "@/lib/analysis/assessment-results";
 import { findAssessment } from "@/lib/data/assessments";
+import { resultsOptionsFrom } from "@/lib/analysis/results-options";
 import { trialForPage } from "@/lib/trials/page-access";
 import { uuidSchema } from "@/lib/validations/common";
 
 export const metadata: Metadata = { title: "Assessment results" };
 export const dynamic = "force-dynamic";
 
-export default async function AssessmentResultsPage({ params }: { params: Promise<{ trialId: string; assessmentId: string }> }) {
+export default async function AssessmentResultsPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ trialId: string; assessmentId: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const { trialId, assessmentId } = await params;
   const { trial } = await trialForPage(trialId, "analysis:read");
   if (!uuidSchema.safeParse(assessmentId).success) notFound();
@@ -36,7 +43,11 @@ export default async function AssessmentResultsPage({ params }: { params: Promis
         trialId={trial.id}
         assessmentId={assessment.id}
         treatments={treatments.map(({ code, name }) => ({ code, name }))}
-        initial={{ transform: "none", method: "lsd", alpha: "0.05", control: isWeed ? (defaultControl(treatments) ?? "") : "", reference: "", margin: "" }}
+        initial={resultsOptionsFrom(
+          await searchParams,
+          { transform: "none", method: "lsd", alpha: "0.05", control: isWeed ? (defaultControl(treatments) ?? "") : "", reference: "", margin: "" },
+          treatments.map((treatment) => treatment.code),
+        )}
       />
     </section>
   );
