@@ -26,6 +26,23 @@ export async function requestReview(trial: Trial, userId: string, message: strin
   return request;
 }
 
+/**
+ * The owner takes an open request back (data still coming in, a mistake found): the request is
+ * closed as withdrawn, the reviewers can no longer approve it, and a new request can follow.
+ */
+export async function withdrawReview(trial: Trial, userId: string): Promise<ReviewRequest> {
+  return db().transaction(async (transaction) => {
+    const open = await ReviewRequest.findOne({ where: { trialId: trial.id, status: "requested" }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!open) throw new AppError("CONFLICT", "There is no open review request to withdraw.");
+    await open.update({ status: "withdrawn", decidedById: userId, decidedAt: new Date() }, { transaction });
+    await AuditEvent.create(
+      { trialId: trial.id, userId, entityType: "review", entityId: open.id, action: "update", summary: "Review request withdrawn", oldValue: { status: "requested" }, newValue: { status: "withdrawn" }, source: "review", reason: null },
+      { transaction },
+    );
+    return open;
+  });
+}
+
 export async function addComment(trial: Trial, userId: string, input: { body: string; assessmentId: string | null; parentId: string | null }): Promise<ReviewComment> {
   if (input.assessmentId) {
     const [found] = await db().query("SELECT 1 FROM assessments WHERE id = :id AND trial_id = :trialId", { replacements: { id: input.assessmentId, trialId: trial.id }, type: QueryTypes.SELECT });

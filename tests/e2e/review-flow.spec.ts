@@ -32,6 +32,13 @@ test("researcher asks for review, reviewer comments and approves, the trial lock
   const trialId = page.url().split("/trials/")[1];
   lockedTrialId = trialId;
   await page.goto(`/trials/${trialId}/review`);
+  // Asked too early, taken back, asked again.
+  await page.getByRole("button", { name: "Request review" }).click();
+  await expect(page.getByTestId("review-status")).toContainText("Review requested");
+  await page.getByRole("button", { name: "Withdraw the review request" }).click();
+  await expect(page.getByTestId("review-status")).toContainText("Review withdrawn");
+  await expect(page.getByTestId("review-status")).toContainText("withdrawn by Petra Quillfeather");
+  await page.screenshot({ path: "test-results/review-withdrawn.png", fullPage: false });
   await page.getByLabel("Message to the reviewers (optional)").fill("All five assessments are in.");
   await page.getByRole("button", { name: "Request review" }).click();
   await expect(page.getByTestId("review-status")).toContainText("Review requested");

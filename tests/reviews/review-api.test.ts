@@ -35,6 +35,19 @@ describe("review and sign-off", () => {
     expect((await researcher.request(`${base()}/request`, { method: "POST", json: {} })).status).toBe(409);
   });
 
+  it("lets the owner withdraw an open request, audited, and ask again", async () => {
+    expect((await reviewer.request(`${base()}/request`, { method: "DELETE" })).status).toBe(403);
+    const withdrawn = await researcher.request(`${base()}/request`, { method: "DELETE" });
+    expect(withdrawn.status).toBe(200);
+    expect((await withdrawn.json()).status).toBe("withdrawn");
+    expect((await researcher.request(`${base()}/request`, { method: "DELETE" })).status).toBe(409);
+    // Nothing open: the reviewer cannot approve a withdrawn request.
+    expect((await reviewer.request(`${base()}/approve`, { method: "POST", json: {} })).status).toBe(409);
+    const audit = await AuditEvent.findOne({ where: { trialId: fixture.trial.id, summary: "Review request withdrawn" } });
+    expect(audit?.newValue).toEqual({ status: "withdrawn" });
+    expect((await researcher.request(`${base()}/request`, { method: "POST", json: { message: "Now with the yield sheet." } })).status).toBe(201);
+  });
+
   it("keeps threaded comments per assessment that can be resolved", async () => {
     const first = await reviewer.request(`${base()}/comments`, { method: "POST", json: { body: "Block 3 looks high; check the sheet.", assessmentId: fixture.assessment.id } });
     expect(first.status).toBe(201);

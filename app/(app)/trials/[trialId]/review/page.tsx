@@ -43,7 +43,9 @@ export default async function ReviewPage({ params }: { params: Promise<{ trialId
           <p className="text-sm text-soil-700">
             Requested by {review.requestedBy} on {new Date(review.createdAt).toISOString().slice(0, 10)}
             {review.message ? `: “${review.message}”` : ""}
-            {review.decidedAt ? ` · approved by ${review.decidedBy} on ${new Date(review.decidedAt).toISOString().slice(0, 10)}${review.decisionNote ? `: “${review.decisionNote}”` : ""}` : ""}
+            {review.decidedAt
+              ? ` · ${review.status === "withdrawn" ? "withdrawn" : "approved"} by ${review.decidedBy} on ${new Date(review.decidedAt).toISOString().slice(0, 10)}${review.decisionNote ? `: “${review.decisionNote}”` : ""}`
+              : ""}
           </p>
         )}
         {trial.status === "locked" && <p className="mt-1 text-sm">The trial is locked: data are read-only, and any later change needs a reason that appears in the audit trail.</p>}
@@ -51,6 +53,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ trialId
       <ReviewActions
         trialId={trial.id}
         mayRequest={can(user.role, "review:request") && trial.status === "active" && !open}
+        mayWithdraw={can(user.role, "review:request") && trial.status === "active" && open}
         mayApprove={can(user.role, "review:approve") && trial.status === "active" && open}
       />
       <section aria-labelledby="general-heading">

@@ -1,6 +1,6 @@
 import { route } from "@/lib/auth/guard";
 import { jsonResponse } from "@/lib/http";
-import { requestReview } from "@/lib/reviews/service";
+import { requestReview, withdrawReview } from "@/lib/reviews/service";
 import { reviewRequestResponse, reviewRequestSchema, reviewTrialParams } from "@/lib/validations/reviews";
 
 export const dynamic = "force-dynamic";
@@ -13,3 +13,9 @@ export const POST = route(
     return jsonResponse(reviewRequestResponse, request.get({ plain: true }), 201);
   },
 );
+
+/** The owner withdraws an open request (409 when none is open). */
+export const DELETE = route({ permission: "review:request", params: reviewTrialParams, trialId: ({ params }) => params.trialId }, async ({ trial, user }) => {
+  const request = await withdrawReview(trial!, user.id);
+  return jsonResponse(reviewRequestResponse, request.get({ plain: true }));
+});
