@@ -14,16 +14,22 @@ export function hashedBucket(prefix: string, value: string): string {
   return `${prefix}:${createHash("sha256").update(value).digest("hex").slice(0, 32)}`;
 }
 
-/** Whether any bucket already holds its limit within its window (nothing is recorded). */
+/** Whether any bucket already holds its limit within its window (nothing is recorded). One query for all buckets: it sits before every sign-in. */
 export async function overLimit(limits: Limit[], now = new Date()): Promise<boolean> {
-  for (const limit of limits) {
-    const [row] = await db().query<{ count: string }>(
-      "SELECT count(*) AS count FROM rate_limit_hits WHERE bucket = :bucket AND created_at >= :since",
-      { type: QueryTypes.SELECT, replacements: { bucket: limit.bucket, since: new Date(now.getTime() - limit.windowMs) } },
-    );
-    if (Number(row.count) >= limit.max) return true;
-  }
-  return false;
+  if (limits.length === 0) return false;
+  const rows = await db().query<{ full: boolean }>(
+    `SELECT (SELECT count(*) FROM rate_limit_hits h WHERE h.bucket = l.bucket AND h.created_at >= l.since) >= l.max AS full
+       FROM unnest(ARRAY[:buckets]::text[], ARRAY[:sinces]::timestamptz[], ARRAY[:maxes]::int[]) AS l(bucket, since, max)`,
+    {
+      type: QueryTypes.SELECT,
+      replacements: {
+        buckets: limits.map((limit) => limit.bucket),
+        sinces: limits.map((limit) => new Date(now.getTime() - limit.windowMs).toISOString()),
+        maxes: limits.map((limit) => limit.max),
+      },
+    },
+  );
+  return rows.some((row) => row.full);
 }
 
 /** Records one hit in every bucket, dropping hits older than the window. */

@@ -21,8 +21,8 @@ export const authOptions: NextAuthOptions = {
         const parsed = signInSchema.safeParse(credentials);
         if (!parsed.success) return null;
         const clientAddress = clientAddressOf(request?.headers);
-        await assertSignInAllowed(parsed.data.email, clientAddress);
-        const user = await findUserForSignIn(parsed.data.email);
+        // Both before the hash comparison, at once: a refused attempt never reaches it.
+        const [, user] = await Promise.all([assertSignInAllowed(parsed.data.email, clientAddress), findUserForSignIn(parsed.data.email)]);
         const passwordMatches = await verifyPassword(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
         if (!user || !user.active || !passwordMatches) {
           await recordFailedSignIn(parsed.data.email, clientAddress);
