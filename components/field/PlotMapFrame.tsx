@@ -1,5 +1,6 @@
 import { LruCache } from "@/lib/lru-cache";
 import type { PlotMapProps } from "@/lib/layout/types";
+import type { FieldPlan } from "@/lib/trials/field-sheets";
 import type { Trial } from "@/models";
 import { renderPlotMapSvg } from "./PlotMap";
 
@@ -21,8 +22,12 @@ export function plotMapCacheKey(trial: Trial, variant: string): string {
  * from renderStaticMarkup, which escapes every text and attribute as React does (tested
  * against renderToStaticMarkup).
  */
-export function PlotMapFrame({ cacheKey, className, testId, ...props }: PlotMapProps & { cacheKey: string; className: string; testId?: string }) {
+export function PlotMapFrame({ plan, showWalkingOrder, cacheKey, className, testId }: { plan: FieldPlan; showWalkingOrder?: boolean; cacheKey: string; className: string; testId?: string }) {
   let markup = builtMaps.get(cacheKey);
-  if (markup === undefined) builtMaps.set(cacheKey, (markup = renderPlotMapSvg(props)));
+  if (markup === undefined) {
+    const { title, plots, treatments, plotLengthM, plotWidthM, design, serpentine } = plan;
+    const props: PlotMapProps = { title, plots, treatments, plotLengthM, plotWidthM, design, serpentine, showWalkingOrder };
+    builtMaps.set(cacheKey, (markup = renderPlotMapSvg(props)));
+  }
   return <div className={className} data-testid={testId} dangerouslySetInnerHTML={{ __html: markup }} />;
 }

@@ -86,13 +86,7 @@ export default async function TrialPage({ params }: { params: Promise<{ trialId:
               <PlotMapFrame
                 cacheKey={plotMapCacheKey(trial, "overview")}
                 className="overflow-x-auto rounded border border-soil-200 bg-white p-2"
-                title={plan.title}
-                plots={plan.plots}
-                treatments={plan.treatments}
-                plotLengthM={plan.plotLengthM}
-                plotWidthM={plan.plotWidthM}
-                design={plan.design}
-                serpentine={plan.serpentine}
+                plan={plan}
               />
             ) : (
               <p className="rounded border border-dashed border-soil-200 bg-white p-4 text-soil-700">No plots laid out yet.</p>

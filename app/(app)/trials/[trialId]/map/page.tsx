@@ -50,13 +50,7 @@ export default async function PlotMapPage({ params }: { params: Promise<{ trialI
             cacheKey={plotMapCacheKey(trial, "printable")}
             className="overflow-x-auto rounded border border-soil-200 bg-white p-2 print:border-0 print:p-0"
             testId="plot-map"
-            title={plan.title}
-            plots={plan.plots}
-            treatments={plan.treatments}
-            plotLengthM={plan.plotLengthM}
-            plotWidthM={plan.plotWidthM}
-            design={plan.design}
-            serpentine={plan.serpentine}
+            plan={plan}
             showWalkingOrder={plan.serpentine}
           />
           {plan.cautions.length > 0 && (
