@@ -29,10 +29,6 @@ const restarts: number[] = [];
 const workerFlags = ["--max-semi-space-size=64", ...(process.env.HOEBENCH_WORKER_NODE_FLAGS ?? "").split(" ").filter(Boolean)];
 cluster.setupPrimary({ exec: nextBin, args: ["start", ...process.argv.slice(2)], execArgv: workerFlags });
 
-function fork(): void {
-  cluster.fork();
-}
-
 cluster.on("exit", (worker, code, signal) => {
   if (stopping) {
     if (Object.keys(cluster.workers ?? {}).length === 0) process.exit(exitCode);
@@ -48,7 +44,7 @@ cluster.on("exit", (worker, code, signal) => {
     return;
   }
   say(`app worker ${worker.process.pid} stopped (${signal ?? `exit ${code}`}); starting another`);
-  fork();
+  cluster.fork();
 });
 
 function stop(code = 0): void {
@@ -65,4 +61,4 @@ process.on("SIGTERM", () => stop());
 process.on("SIGINT", () => stop());
 
 say(`serving with ${workers} app worker${workers === 1 ? "" : "s"}`);
-for (let index = 0; index < workers; index += 1) fork();
+for (let index = 0; index < workers; index += 1) cluster.fork();

@@ -17,7 +17,7 @@ async function sessionToken(): Promise<string | null> {
   const jar = await cookies();
   const cookieValues = Object.fromEntries(jar.getAll().map((cookie) => [cookie.name, cookie.value]));
   // No headers: the session comes from its cookie only, never from an Authorization header.
-  const token = await getToken({ req: { cookies: cookieValues, headers: {} } as never, raw: true, secret: config().NEXTAUTH_SECRET });
+  const token = await getToken({ req: { cookies: cookieValues, headers: {} } as never, raw: true });
   return typeof token === "string" && token.length > 0 ? token : null;
 }
 

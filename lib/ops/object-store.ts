@@ -1,16 +1,10 @@
-import { CreateBucketCommand, GetObjectCommand, HeadBucketCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { CreateBucketCommand, GetObjectCommand, HeadBucketCommand, ListObjectsV2Command, PutObjectCommand } from "@aws-sdk/client-s3";
 import type { AppConfig } from "@/lib/config";
+import { createS3Client } from "@/lib/storage/client";
 
 /** A plain S3 client for backups and restores, which run outside the app (its own module is server-only). */
 export function objectStore(settings: AppConfig) {
-  const client = new S3Client({
-    endpoint: settings.S3_ENDPOINT,
-    region: settings.S3_REGION,
-    forcePathStyle: settings.S3_FORCE_PATH_STYLE,
-    credentials: { accessKeyId: settings.S3_ACCESS_KEY_ID, secretAccessKey: settings.S3_SECRET_ACCESS_KEY },
-    requestChecksumCalculation: "WHEN_REQUIRED",
-    responseChecksumValidation: "WHEN_REQUIRED",
-  });
+  const client = createS3Client(settings);
   return {
     async get(bucket: string, key: string): Promise<Buffer | null> {
       try {

@@ -1,24 +1,14 @@
 import "server-only";
-import { HeadBucketCommand, S3Client } from "@aws-sdk/client-s3";
+import { HeadBucketCommand, type S3Client } from "@aws-sdk/client-s3";
 import { config } from "@/lib/config";
+import { createS3Client } from "./client";
 
 const globalForS3 = globalThis as unknown as { hoebenchS3?: S3Client };
 
 /** Path-style against the loopback fake; a real bucket needs only other settings. */
 export function s3(): S3Client {
-  if (!globalForS3.hoebenchS3) {
-    const settings = config();
-    globalForS3.hoebenchS3 = new S3Client({
-      endpoint: settings.S3_ENDPOINT,
-      region: settings.S3_REGION,
-      forcePathStyle: settings.S3_FORCE_PATH_STYLE,
-      credentials: { accessKeyId: settings.S3_ACCESS_KEY_ID, secretAccessKey: settings.S3_SECRET_ACCESS_KEY },
-      // Otherwise presigned PUT URLs carry a checksum of an empty body and browsers' uploads fail.
-      requestChecksumCalculation: "WHEN_REQUIRED",
-      responseChecksumValidation: "WHEN_REQUIRED",
-      maxAttempts: 2,
-    });
-  }
+  // Two attempts: a storage outage should answer the user quickly, not after long retries.
+  globalForS3.hoebenchS3 ??= createS3Client(config(), { maxAttempts: 2 });
   return globalForS3.hoebenchS3;
 }
 

@@ -1,39 +1,33 @@
 import { readdirSync, readFileSync } from "node:fs";
 
-/** CPU seconds used so far by every process in a process group (Linux /proc), to report CPU per request. */
-export function groupCpuSeconds(groupId: number): number {
-  const ticksPerSecond = 100;
+const TICKS_PER_SECOND = 100;
+
+/** CPU seconds so far of every process whose /proc stat line passes `matches` (name, then the fields after it). */
+function processCpuSeconds(matches: (command: string, fields: string[]) => boolean): number {
   let ticks = 0;
   for (const entry of readdirSync("/proc")) {
     if (!/^\d+$/.test(entry)) continue;
     try {
       const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
+      const command = stat.slice(stat.indexOf("(") + 1, stat.lastIndexOf(")"));
+      // After the command name: state, ppid, pgrp, …; utime and stime are the 12th and 13th of these.
       const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-      // After the command name: state, ppid, pgrp, …; utime and stime are fields 14 and 15 of the full line.
-      if (Number(fields[2]) === groupId) ticks += Number(fields[11]) + Number(fields[12]);
+      if (matches(command, fields)) ticks += Number(fields[11]) + Number(fields[12]);
     } catch {
       // the process ended while we looked
     }
   }
-  return ticks / ticksPerSecond;
+  return ticks / TICKS_PER_SECOND;
 }
 
+/** CPU seconds used so far by every process in a process group, to report CPU per request. */
+export function groupCpuSeconds(groupId: number): number {
+  return processCpuSeconds((_command, fields) => Number(fields[2]) === groupId);
+}
 
 /** CPU seconds used so far by every process whose command name is `command` (e.g. "postgres"). */
 export function commandCpuSeconds(command: string): number {
-  let ticks = 0;
-  for (const entry of readdirSync("/proc")) {
-    if (!/^\d+$/.test(entry)) continue;
-    try {
-      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
-      if (stat.slice(stat.indexOf("(") + 1, stat.lastIndexOf(")")) !== command) continue;
-      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-      ticks += Number(fields[11]) + Number(fields[12]);
-    } catch {
-      // the process ended while we looked
-    }
-  }
-  return ticks / 100;
+  return processCpuSeconds((name) => name === command);
 }
 
 /** Busy and total CPU ticks of the whole machine so far (Linux /proc/stat), for a busy share over an interval. */
