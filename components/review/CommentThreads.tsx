@@ -49,18 +49,39 @@ function CommentForm({ trialId, assessmentId, parentId, label, onDone }: { trial
 }
 
 /** Comment threads of one assessment (or the whole trial): replies under their first comment, resolvable. */
-export function CommentThreads({ trialId, assessmentId, comments, mayComment }: { trialId: string; assessmentId: string | null; comments: CommentItem[]; mayComment: boolean }) {
+export function CommentThreads({
+  trialId,
+  assessmentId,
+  comments,
+  mayComment,
+  viewerName,
+}: {
+  trialId: string;
+  assessmentId: string | null;
+  comments: CommentItem[];
+  mayComment: boolean;
+  viewerName: string;
+}) {
   const router = useRouter();
+  // The answer of a resolve is shown at once: a page refresh still in flight from an earlier
+  // action could otherwise bring back the state from before it.
+  const [decided, setDecided] = useState<Record<string, boolean>>({});
+  const [resolveError, setResolveError] = useState<string | null>(null);
   const threads = comments.filter((comment) => comment.parentId === null);
+  const isResolved = (thread: CommentItem) => decided[thread.id] ?? Boolean(thread.resolvedAt);
+  const resolverOf = (thread: CommentItem) => (thread.id in decided && decided[thread.id] && !thread.resolvedAt ? viewerName : thread.resolvedBy);
   async function resolve(id: string, resolved: boolean) {
-    await callApi(`/api/reviews/${trialId}/comments/${id}`, { method: "PATCH", json: { resolved } });
+    const answer = await callApi(`/api/reviews/${trialId}/comments/${id}`, { method: "PATCH", json: { resolved } });
+    if (!answer.ok) return setResolveError(answer.error.message);
+    setResolveError(null);
+    setDecided((current) => ({ ...current, [id]: resolved }));
     router.refresh();
   }
   return (
     <div className="space-y-3">
       {threads.length === 0 && <p className="text-sm text-soil-700">No comments yet.</p>}
       {threads.map((thread) => (
-        <article key={thread.id} className={`rounded border p-3 ${thread.resolvedAt ? "border-soil-200 bg-soil-50" : "border-amber-300 bg-white"}`} data-testid="comment-thread">
+        <article key={thread.id} className={`rounded border p-3 ${isResolved(thread) ? "border-soil-200 bg-soil-50" : "border-amber-300 bg-white"}`} data-testid="comment-thread">
           {[thread, ...comments.filter((comment) => comment.parentId === thread.id)].map((comment) => (
             <div key={comment.id} className={comment.parentId ? "ml-4 mt-2 border-l-2 border-soil-200 pl-3" : ""}>
               <p className="text-xs text-soil-700">
@@ -70,20 +91,21 @@ export function CommentThreads({ trialId, assessmentId, comments, mayComment }: 
             </div>
           ))}
           <div className="mt-2 flex flex-wrap items-center gap-2">
-            {thread.resolvedAt ? <span className="text-xs text-leaf-700">Resolved by {thread.resolvedBy}</span> : <span className="text-xs text-amber-800">Open</span>}
+            {isResolved(thread) ? <span className="text-xs text-leaf-700">Resolved by {resolverOf(thread)}</span> : <span className="text-xs text-amber-800">Open</span>}
             {mayComment && (
-              <button type="button" className={smallButton} onClick={() => resolve(thread.id, !thread.resolvedAt)}>
-                {thread.resolvedAt ? "Reopen" : "Resolve"}
+              <button type="button" className={smallButton} onClick={() => resolve(thread.id, !isResolved(thread))}>
+                {isResolved(thread) ? "Reopen" : "Resolve"}
               </button>
             )}
           </div>
-          {mayComment && !thread.resolvedAt && (
+          {mayComment && !isResolved(thread) && (
             <div className="mt-2">
               <CommentForm trialId={trialId} assessmentId={assessmentId} parentId={thread.id} label="Reply" />
             </div>
           )}
         </article>
       ))}
+      {resolveError && <p role="alert" className="text-xs text-red-800">{resolveError}</p>}
       {mayComment && <CommentForm trialId={trialId} assessmentId={assessmentId} parentId={null} label="New comment" />}
     </div>
   );

@@ -58,7 +58,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ trialId
       />
       <section aria-labelledby="general-heading">
         <h2 id="general-heading" className="mb-2 text-lg font-semibold">About the whole trial</h2>
-        <CommentThreads trialId={trial.id} assessmentId={null} comments={comments.filter((comment) => comment.assessmentId === null).map(asItem)} mayComment={mayComment} />
+        <CommentThreads trialId={trial.id} assessmentId={null} comments={comments.filter((comment) => comment.assessmentId === null).map(asItem)} mayComment={mayComment} viewerName={user.name} />
       </section>
       {assessments.map((assessment, index) => {
         const results = summaries[index];
@@ -82,7 +82,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ trialId
                 {results.warnings.map((warning) => <li key={warning}>{warning}</li>)}
               </ul>
             )}
-            <CommentThreads trialId={trial.id} assessmentId={assessment.id} comments={comments.filter((comment) => comment.assessmentId === assessment.id).map(asItem)} mayComment={mayComment} />
+            <CommentThreads trialId={trial.id} assessmentId={assessment.id} comments={comments.filter((comment) => comment.assessmentId === assessment.id).map(asItem)} mayComment={mayComment} viewerName={user.name} />
           </section>
         );
       })}
