@@ -3,7 +3,6 @@ import { Assessment } from "./Assessment";
 import { AuditEvent } from "./AuditEvent";
 import { DatasetVersion } from "./DatasetVersion";
 import { Membership } from "./Membership";
-import { Observation } from "./Observation";
 import { Photo } from "./Photo";
 import { Plot } from "./Plot";
 import { Site } from "./Site";
@@ -21,7 +20,7 @@ import { NotificationDigestItem } from "./NotificationDigestItem";
 import { NotificationSetting } from "./NotificationSetting";
 import { PasswordResetToken } from "./PasswordResetToken";
 
-export { Assessment, AuditEvent, DatasetVersion, Membership, Observation, Photo, Plot, Site, Treatment, Trial, Upload, User };
+export { Assessment, AuditEvent, DatasetVersion, Membership, Photo, Plot, Site, Treatment, Trial, Upload, User };
 export { Follow, TrialSummary };
 export { Invitation, MailMessage, NotificationDigestItem, NotificationSetting, PasswordResetToken };
 export { ReviewComment, ReviewRequest };
@@ -44,7 +43,6 @@ export function initModels(sequelize: Sequelize): void {
   Assessment.initModel(sequelize);
   Upload.initModel(sequelize);
   DatasetVersion.initModel(sequelize);
-  Observation.initModel(sequelize);
   AuditEvent.initModel(sequelize);
   Photo.initModel(sequelize);
   ReviewRequest.initModel(sequelize);
@@ -72,7 +70,6 @@ export function initModels(sequelize: Sequelize): void {
   DatasetVersion.belongsTo(User, { as: "createdBy", foreignKey: "createdById" });
   DatasetVersion.belongsTo(Upload, { as: "upload", foreignKey: "uploadId" });
   Upload.belongsTo(User, { as: "uploadedBy", foreignKey: "uploadedById" });
-  Observation.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
   AuditEvent.belongsTo(User, { as: "user", foreignKey: "userId" });
   Photo.belongsTo(Plot, { as: "plot", foreignKey: "plotId" });
   ReviewComment.belongsTo(User, { as: "author", foreignKey: "authorId" });

@@ -21,11 +21,16 @@ export interface AssessmentDataStatus {
 export async function dataStatusOf(trialId: string): Promise<AssessmentDataStatus[]> {
   return db().query<AssessmentDataStatus>(
     `SELECT a.id, a.name, a.variable, a.unit, a.planned_date AS "plannedDate", a.quadrats_per_plot AS "quadratsPerPlot",
-            (SELECT COALESCE(sum(s.row_count), 0)::int FROM observation_sets s WHERE s.assessment_id = a.id AND s.replaced_in_version_id IS NULL) AS values,
-            (SELECT count(*)::int FROM observation_sets s WHERE s.assessment_id = a.id AND s.replaced_in_version_id IS NULL AND s.row_count > 0) AS "plotsWithValues",
+            current.values, current."plotsWithValues",
             (SELECT max(v.number) FROM dataset_versions v WHERE v.assessment_id = a.id) AS "latestVersion",
             (SELECT max(v.created_at) FROM dataset_versions v WHERE v.assessment_id = a.id) AS "updatedAt"
-       FROM assessments a WHERE a.trial_id = :trialId ORDER BY a.position`,
+       FROM assessments a
+       CROSS JOIN LATERAL (
+         SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int AS values, count(v.plot_id)::int AS "plotsWithValues"
+           FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
+          WHERE s.assessment_id = a.id AND s.replaced_in_version_id IS NULL
+       ) current
+      WHERE a.trial_id = :trialId ORDER BY a.position`,
     { replacements: { trialId }, type: QueryTypes.SELECT },
   );
 }

@@ -52,15 +52,8 @@ export interface ValueChange {
 /** What one version changed against the values it replaced; unchanged values are left out. */
 export async function changesIn(versionId: string): Promise<ValueChange[]> {
   return db().query<ValueChange>(
-    `WITH version AS (SELECT id, assessment_id FROM dataset_versions WHERE id = :versionId),
-          added AS (SELECT o.plot_id, o.quadrat, o.species, o.value FROM version v
-                      JOIN observations o ON o.assessment_id = v.assessment_id AND o.added_in_version_id = v.id),
-          replaced_sets AS (SELECT s.assessment_id, s.version_id, s.plot_id FROM version v JOIN observation_sets s ON s.replaced_in_version_id = v.id),
-          -- Version first, then the plots: see migrations/20261202110000-rebuild-current-observations-view.ts.
-          replaced AS (SELECT o.plot_id, o.quadrat, o.species, o.value
-                         FROM (SELECT DISTINCT assessment_id, version_id FROM replaced_sets) earlier
-                         JOIN observations o ON o.assessment_id = earlier.assessment_id AND o.added_in_version_id = earlier.version_id
-                        WHERE EXISTS (SELECT 1 FROM replaced_sets s WHERE s.version_id = o.added_in_version_id AND s.plot_id = o.plot_id))
+    `WITH added AS (SELECT plot_id, quadrat, species, value FROM observations WHERE added_in_version_id = :versionId),
+          replaced AS (SELECT plot_id, quadrat, species, value FROM observations WHERE replaced_in_version_id = :versionId)
      SELECT p.number AS "plotNumber", COALESCE(a.quadrat, r.quadrat) AS quadrat, COALESCE(a.species, r.species) AS species,
             r.value AS before, a.value AS after
        FROM added a FULL OUTER JOIN replaced r ON a.plot_id = r.plot_id AND a.quadrat = r.quadrat AND a.species = r.species

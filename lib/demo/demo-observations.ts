@@ -107,12 +107,12 @@ async function seedTrial(sequelize: Sequelize, transaction: Transaction | undefi
       { replacements: { assessmentId: assessment.id, trialId, userId: technicianId, rows: rows.length }, type: QueryTypes.SELECT, transaction },
     );
     await sequelize.query(
-      `INSERT INTO observations (assessment_id, plot_id, quadrat, species, value, added_in_version_id)
-       SELECT :assessmentId, plot_id, quadrat, '', value, :versionId
-         FROM unnest(:plotIds::uuid[], :quadrats::int[], :values::float8[]) AS v(plot_id, quadrat, value)`,
+      `INSERT INTO observation_values (version_id, plot_id, quadrats, species, "values")
+       SELECT :versionId, plot_id, array_agg(quadrat ORDER BY position), array_agg(''::text ORDER BY position), array_agg(value ORDER BY position)
+         FROM unnest(:plotIds::uuid[], :quadrats::int[], :values::float8[]) WITH ORDINALITY AS v(plot_id, quadrat, value, position)
+        GROUP BY plot_id`,
       {
         replacements: {
-          assessmentId: assessment.id,
           versionId: version.id,
           plotIds: `{${rows.map((row) => row.plotId).join(",")}}`,
           quadrats: `{${rows.map((row) => row.quadrat).join(",")}}`,

@@ -5,6 +5,7 @@ import type pg from "pg";
 import { AuditEvent, DatasetVersion } from "@/models";
 import type { VersionSource } from "@/models/DatasetVersion";
 import { copyValues } from "./copy-values";
+import { groupValuesByPlot } from "./group-values";
 
 export interface NewValue {
   plotNumber: number;
@@ -42,26 +43,6 @@ async function lockAssessment(sequelize: Sequelize, request: CommitRequest, tran
   return row.status;
 }
 
-/**
- * One value per plot, quadrat and species in a version. Uploads and plot entries check this
- * for the user with row numbers; this is the last line, kept here rather than as a unique
- * index, which would cost a third of a large commit.
- */
-function assertOneValueEach(values: readonly NewValue[], plotIndex: Map<number, number>): void {
-  const seenBySpecies = new Map<string, Set<number>>();
-  for (const value of values) {
-    let seen = seenBySpecies.get(value.species);
-    if (!seen) seenBySpecies.set(value.species, (seen = new Set()));
-    if (!Number.isInteger(value.quadrat) || value.quadrat < 1 || value.quadrat >= 65_536) throw new AppError("INVALID_INPUT", `Quadrat ${value.quadrat} is not a quadrat number.`);
-    // Small integers while plots are few, which they are: no string per value.
-    const key = plotIndex.get(value.plotNumber)! * 65_536 + value.quadrat;
-    if (seen.has(key)) {
-      throw new AppError("INVALID_INPUT", `Plot ${value.plotNumber}, quadrat ${value.quadrat}${value.species ? `, ${value.species}` : ""} has more than one value.`);
-    }
-    seen.add(key);
-  }
-}
-
 /** Sequelize keeps the pg client of a transaction here; COPY has to run on that very client. */
 function clientOf(transaction: Transaction): pg.ClientBase {
   const client = (transaction as unknown as { connection?: pg.ClientBase }).connection;
@@ -73,7 +54,7 @@ function clientOf(transaction: Transaction): pg.ClientBase {
  * Writes a new numbered version of an assessment's data in one transaction: all of it or
  * none. The assessment row is locked first, so two commits at once become versions N and
  * N+1 in turn, never a mix. Old values are superseded plot by plot (observation sets), never
- * overwritten; the new ones go in with one binary COPY.
+ * overwritten; the new ones go in with one binary COPY, a row per plot.
  */
 export async function commitVersion(sequelize: Sequelize, request: CommitRequest): Promise<CommittedVersion> {
   return sequelize.transaction(async (transaction) => {
@@ -117,19 +98,17 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     // one turn of the event loop puts the insert on the wire before this thread gets busy.
     creating.catch(() => {});
     await new Promise((resolve) => setImmediate(resolve));
-    assertOneValueEach(request.values, new Map(plots.map((plot, index) => [plot.number, index])));
+    const grouped = groupValuesByPlot(request.values, plots.map((plot) => plot.number));
     const version = await creating;
 
     // The version's insert trigger has closed the earlier sets of the plots it covers.
     const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
-      'SELECT COALESCE(sum(row_count), 0)::int AS "rowsReplaced" FROM observation_sets WHERE replaced_in_version_id = :versionId',
+      `SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int AS "rowsReplaced"
+         FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
+        WHERE s.replaced_in_version_id = :versionId`,
       { replacements: { versionId: version.id }, type: QueryTypes.SELECT, transaction },
     );
-    if (request.values.length > 0) {
-      // The insert trigger sees the new rows as one table; 100,000 of them would spill past the default 4 MB to disk.
-      await sequelize.query("SET LOCAL work_mem = '32MB'", { transaction });
-      await copyValues(clientOf(transaction), request.values, request.assessmentId, version.id, plotIds);
-    }
+    if (grouped.length > 0) await copyValues(clientOf(transaction), grouped, version.id, plotIds);
     if (request.uploadId) {
       // Inside the same transaction, so a file can never become two versions.
       const [, marked] = (await sequelize.query(

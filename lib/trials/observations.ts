@@ -10,7 +10,9 @@ import { db } from "@/lib/db/sequelize";
 export async function hasObservations(trialId: string, assessmentId?: string): Promise<boolean> {
   const [row] = await db().query<{ found: boolean }>(
     `SELECT EXISTS (
-       SELECT 1 FROM observations o JOIN assessments a ON a.id = o.assessment_id
+       SELECT 1 FROM observation_values v
+         JOIN observation_sets s ON s.version_id = v.version_id AND s.plot_id = v.plot_id
+         JOIN assessments a ON a.id = s.assessment_id
         WHERE a.trial_id = :trialId ${assessmentId ? "AND a.id = :assessmentId" : ""}
      ) AS found`,
     { type: QueryTypes.SELECT, replacements: { trialId, assessmentId: assessmentId ?? null } },
@@ -21,7 +23,10 @@ export async function hasObservations(trialId: string, assessmentId?: string): P
 /** The assessments of a trial that have observations, which pins them. */
 export async function assessmentsWithObservations(trialId: string): Promise<Set<string>> {
   const rows = await db().query<{ assessment_id: string }>(
-    "SELECT DISTINCT o.assessment_id FROM observations o JOIN assessments a ON a.id = o.assessment_id WHERE a.trial_id = :trialId",
+    `SELECT DISTINCT s.assessment_id FROM observation_values v
+       JOIN observation_sets s ON s.version_id = v.version_id AND s.plot_id = v.plot_id
+       JOIN assessments a ON a.id = s.assessment_id
+      WHERE a.trial_id = :trialId`,
     { type: QueryTypes.SELECT, replacements: { trialId } },
   );
   return new Set(rows.map((row) => row.assessment_id));

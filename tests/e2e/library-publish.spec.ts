@@ -2,6 +2,7 @@ import { expect, test } from "@playwright/test";
 import { randomUUID } from "node:crypto";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
+import { writeRawValues } from "../factories/observations";
 
 let fixture: TrialFixture;
 
@@ -9,7 +10,7 @@ test.beforeAll(async () => {
   fixture = await createTrialFixture({ status: "active", treatments: 3, blocks: 4 });
   const counts: Record<number, number[]> = { 1: [40, 48, 44, 52], 2: [4, 6, 5, 3], 3: [20, 26, 18, 30] };
   const values = fixture.plots.flatMap((plot) => [1, 2].map((quadrat) => ({ plotNumber: plot.number, quadrat, species: "all", value: counts[plot.position][plot.block - 1] })));
-  // Straight into the tables (the app's commitVersion is server-only code the browser runner cannot load).
+  // Straight into the tables: see writeRawValues.
   const sequelize = testDatabase();
   const versionId = randomUUID();
   await sequelize.query(
@@ -18,12 +19,7 @@ test.beforeAll(async () => {
     { replacements: { versionId, assessmentId: fixture.assessment.id, trialId: fixture.trial.id, userId: fixture.owner.id, rows: values.length } },
   );
   const plotIds = new Map(fixture.plots.map((plot) => [plot.number, plot.id]));
-  for (const value of values) {
-    await sequelize.query(
-      `INSERT INTO observations (assessment_id, plot_id, quadrat, species, value, added_in_version_id) VALUES (:assessmentId, :plotId, :quadrat, :species, :value, :versionId)`,
-      { replacements: { assessmentId: fixture.assessment.id, plotId: plotIds.get(value.plotNumber), quadrat: value.quadrat, species: value.species, value: value.value, versionId } },
-    );
-  }
+  await writeRawValues(sequelize, versionId, values.map((value) => ({ plotId: plotIds.get(value.plotNumber)!, quadrat: value.quadrat, species: value.species, value: value.value })));
   await fixture.trial.update({ status: "locked" });
 });
 

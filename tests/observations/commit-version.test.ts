@@ -3,7 +3,7 @@ import { QueryTypes } from "sequelize";
 import { commitVersion, type NewValue } from "@/lib/observations/commit-version";
 import { AppError } from "@/lib/errors";
 import { changesIn } from "@/lib/data/observations";
-import { AuditEvent, DatasetVersion, Observation } from "@/models";
+import { AuditEvent, DatasetVersion } from "@/models";
 import { createSequelize } from "@/lib/db/sequelize";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
@@ -16,9 +16,18 @@ function valuesFor(fixture: TrialFixture, value: (plotNumber: number, quadrat: n
 async function currentValues(assessmentId: string) {
   return testDatabase().query<{ plotId: string; quadrat: number; species: string; value: number; addedInVersionId: string }>(
     `SELECT plot_id AS "plotId", quadrat, species, value, added_in_version_id AS "addedInVersionId"
-       FROM current_observations WHERE assessment_id = :assessmentId ORDER BY id`,
+       FROM current_observations WHERE assessment_id = :assessmentId ORDER BY plot_id, position`,
     { replacements: { assessmentId }, type: QueryTypes.SELECT },
   );
+}
+
+/** Every value ever recorded for the assessment, current or replaced. */
+async function valueCount(assessmentId: string): Promise<number> {
+  const [{ count }] = await testDatabase().query<{ count: number }>("SELECT count(*)::int AS count FROM observations WHERE assessment_id = :assessmentId", {
+    replacements: { assessmentId },
+    type: QueryTypes.SELECT,
+  });
+  return count;
 }
 
 describe("committing a version of an assessment's data", () => {
@@ -33,7 +42,7 @@ describe("committing a version of an assessment's data", () => {
     const current = await currentValues(fixture.assessment.id);
     expect(current).toHaveLength(24);
     expect(current.every((row) => row.addedInVersionId === second.id)).toBe(true);
-    const all = await Observation.count({ where: { assessmentId: fixture.assessment.id } });
+    const all = await valueCount(fixture.assessment.id);
     expect(all).toBe(48);
     const audit = await AuditEvent.findAll({ where: { trialId: fixture.trial.id }, order: [["id", "ASC"]] });
     expect(audit.map((event) => event.summary)).toEqual([
@@ -87,22 +96,28 @@ describe("committing a version of an assessment's data", () => {
     });
     const manual = await commitVersion(testDatabase(), { ...request, source: "manual", replacePlotNumbers: [101], values: [{ plotNumber: 101, quadrat: 1, species: "", value: 3 }] });
     // Straight SQL, as a seed or a repair script would write.
-    const insert = (plotId: string, quadrat: number) =>
+    const insert = (plotId: string, quadrats: number[], values: number[]) =>
       testDatabase().query(
-        "INSERT INTO observations (assessment_id, plot_id, quadrat, value, added_in_version_id) VALUES (:assessmentId, :plotId, :quadrat, 1, :versionId)",
-        { replacements: { assessmentId: fixture.assessment.id, plotId, quadrat, versionId: manual.id } },
+        `INSERT INTO observation_values (version_id, plot_id, quadrats, species, "values")
+         VALUES (:versionId, :plotId, :quadrats::int[], :species::text[], :values::float8[])`,
+        {
+          replacements: { versionId: manual.id, plotId, quadrats: `{${quadrats.join(",")}}`, species: `{${quadrats.map(() => '""').join(",")}}`, values: `{${values.join(",")}}` },
+        },
       );
     const plot = (number: number) => fixture.plots.find((candidate) => candidate.number === number)!.id;
-    await expect(insert(plot(102), 1)).rejects.toThrow(/must belong to an observation set/);
-    await insert(plot(101), 2);
-    expect(await currentValues(fixture.assessment.id)).toHaveLength(2);
-    const [{ rowCount }] = await testDatabase().query<{ rowCount: number }>(
-      'SELECT row_count AS "rowCount" FROM observation_sets WHERE version_id = :versionId',
-      { replacements: { versionId: manual.id }, type: QueryTypes.SELECT },
-    );
-    expect(rowCount).toBe(2);
+    await expect(insert(plot(102), [1], [1])).rejects.toThrow(/observation_values_version_id_plot_id_fkey/);
+    await expect(insert(plot(101), [2], [1])).rejects.toMatchObject({ parent: { constraint: "observation_values_pkey" } });
+    await testDatabase().query("DELETE FROM observation_values WHERE version_id = :versionId", { replacements: { versionId: manual.id } });
+    await expect(insert(plot(101), [1, 2], [1])).rejects.toThrow(/observation_values_aligned/);
+    await expect(insert(plot(101), [0], [1])).rejects.toThrow(/observation_values_aligned/);
+    await expect(insert(plot(101), [], [])).rejects.toThrow(/observation_values_aligned/);
+    await insert(plot(101), [1, 2], [3, 4]);
+    expect(await currentValues(fixture.assessment.id)).toMatchObject([
+      { quadrat: 1, value: 3 },
+      { quadrat: 2, value: 4 },
+    ]);
     await fixture.assessment.destroy();
-    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    expect(await valueCount(fixture.assessment.id)).toBe(0);
   });
 
   it("asks for a reason once the trial is locked, and marks the change for the reviewer", async () => {
@@ -121,7 +136,7 @@ describe("committing a version of an assessment's data", () => {
     const attempt = commitVersion(testDatabase(), { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "manual", values: valuesFor(fixture, () => 1), reason: "x" });
     await expect(attempt).rejects.toBeInstanceOf(AppError);
     await expect(attempt).rejects.toMatchObject({ code: "CONFLICT" });
-    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    expect(await valueCount(fixture.assessment.id)).toBe(0);
   });
 
   it("turns two commits at once into two ordered versions, never a mix", async () => {
@@ -149,26 +164,31 @@ describe("committing a version of an assessment's data", () => {
     const victim = createSequelize(testEnvironment().databaseUrl, 1, { bindModels: false });
     const many: NewValue[] = [];
     for (const plot of fixture.plots) for (let quadrat = 1; quadrat <= 50; quadrat += 1) for (const species of ["a", "b", "c", "d", "e", "f", "g", "h"]) many.push({ plotNumber: plot.number, quadrat, species, value: quadrat });
-    // Settled as soon as the connection dies, possibly before the killer's own query returns.
+    // The killer holds the audit table, so the commit stops at its audit entry with its values already written.
+    const killer = createSequelize(testEnvironment().databaseUrl, 1, { bindModels: false });
+    const blocking = await killer.transaction();
+    await killer.query("LOCK TABLE audit_events IN EXCLUSIVE MODE", { transaction: blocking });
     const failure = commitVersion(victim, { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload", values: many }).then(
       () => null,
       (error: unknown) => error,
     );
-    const killer = testDatabase();
     let killed = 0;
     for (let attempt = 0; attempt < 400 && killed === 0; attempt += 1) {
-      const rows = await killer.query<{ killed: boolean }>(
-        "SELECT pg_terminate_backend(pid) AS killed FROM pg_stat_activity WHERE query LIKE 'COPY observations%' AND pid <> pg_backend_pid()",
+      const rows = await testDatabase().query<{ killed: boolean }>(
+        `SELECT pg_terminate_backend(pid) AS killed FROM pg_stat_activity
+          WHERE wait_event_type = 'Lock' AND query LIKE 'INSERT INTO "audit_events"%' AND pid <> pg_backend_pid()`,
         { type: QueryTypes.SELECT },
       );
       killed = rows.filter((row) => row.killed).length;
       if (!killed) await new Promise((resolve) => setTimeout(resolve, 5));
     }
+    await blocking.rollback();
+    await killer.close();
     expect(killed).toBe(1);
     expect(await failure).toBeInstanceOf(Error);
     await victim.close().catch(() => {});
     expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
-    expect(await Observation.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    expect(await valueCount(fixture.assessment.id)).toBe(0);
     expect(await AuditEvent.count({ where: { trialId: fixture.trial.id } })).toBe(0);
   }, 60_000);
 });

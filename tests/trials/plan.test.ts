@@ -8,6 +8,7 @@ import { changeStatus } from "@/lib/trials/readiness";
 import { trialAssessmentsSchema, trialBasicsSchema, trialDesignSchema, trialTreatmentsSchema } from "@/lib/validations/trial";
 import { Assessment, Plot, Site, Treatment, Trial, User } from "@/models";
 import { testDatabase } from "../support/database";
+import { writeRawValues } from "../factories/observations";
 
 // The lib functions reach the database through db(); point it at the test connection.
 const globalForDb = globalThis as unknown as { hoebenchSequelize?: unknown };
@@ -146,9 +147,7 @@ describe("status and edit rules against the database", () => {
        VALUES (:versionId, :assessmentId, :trialId, 1, 'manual', :ownerId, 1, 0, now())`,
       { replacements: { versionId, assessmentId: assessment.id, trialId: trial.id, ownerId } },
     );
-    await sequelize.query("INSERT INTO observations (assessment_id, plot_id, quadrat, value, added_in_version_id) VALUES (:assessmentId, :plotId, 1, 12, :versionId)", {
-      replacements: { assessmentId: assessment.id, plotId: plot.id, versionId },
-    });
+    await writeRawValues(sequelize, versionId, [{ plotId: plot.id, quadrat: 1, value: 12 }]);
     expect((await refusal(saveAssessments(trial, { assessments: [] }))).message).toMatch(/Observations have been recorded for "Weed density"; it cannot be deleted/);
     const changedUnit = { assessments: [{ ...oneAssessment.assessments[0], id: String(assessment.id), unit: "plants per m²" }] };
     expect((await refusal(saveAssessments(trial, changedUnit))).message).toMatch(/unit and quadrats can no longer change/);
