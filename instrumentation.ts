@@ -6,6 +6,9 @@
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
   if (process.env.NEXT_PHASE === "phase-production-build") return;
+  // A bad setting stops the server now, by name, rather than failing requests later.
+  const { config } = await import("./lib/config");
+  config();
   if (process.env.HOEBENCH_BACKGROUND_JOBS === "off") return;
   const { startBackgroundJobs } = await import("./lib/jobs/start");
   startBackgroundJobs();

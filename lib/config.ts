@@ -4,12 +4,15 @@ import { z } from "zod";
  * Every setting the app reads from its environment, validated once. Defaults match the
  * services `npm start` runs on loopback; production sets them all explicitly.
  */
+const DEVELOPMENT_SECRET = "hoebench-local-development-secret";
+const DEVELOPMENT_BASE_URL = "http://127.0.0.1:3000";
+
 const configSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: z.url().default("postgres://postgres@127.0.0.1:54329/hoebench"),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
-  APP_BASE_URL: z.url().default("http://127.0.0.1:3000"),
-  NEXTAUTH_SECRET: z.string().min(16).default("hoebench-local-development-secret"),
+  APP_BASE_URL: z.url().default(DEVELOPMENT_BASE_URL),
+  NEXTAUTH_SECRET: z.string().min(16).default(DEVELOPMENT_SECRET),
   S3_ENDPOINT: z.url().default("http://127.0.0.1:4569"),
   S3_REGION: z.string().min(1).default("us-east-1"),
   S3_BUCKET: z.string().min(3).default("hoebench"),
@@ -24,24 +27,41 @@ const configSchema = z.object({
   MAIL_FROM: z.string().min(3).default("Hoebench <no-reply@hoebench.test>"),
   /** Only the local catcher has one; the in-app mail page exists only when it is set. */
   MAIL_CATCHER_URL: z.url().optional(),
+  /** next-auth's own address for its callbacks; the app's links use APP_BASE_URL. */
+  NEXTAUTH_URL: z.url().optional(),
+  /**
+   * Proxies in front of the app whose X-Forwarded-For entries are believed (0: none, the
+   * client's own address counts; 1: one load balancer). Read where connections arrive
+   * (scripts/client-address.cjs); rate limits per address depend on it.
+   */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
+}).superRefine((settings, context) => {
+  // A development default would let anyone who reads this file sign session cookies.
+  if (settings.NODE_ENV !== "production") return;
+  for (const [name, fallback] of [["NEXTAUTH_SECRET", DEVELOPMENT_SECRET], ["APP_BASE_URL", DEVELOPMENT_BASE_URL]] as const) {
+    if (settings[name] === fallback) context.addIssue({ code: "custom", path: [name], message: "must be set in production" });
+  }
 });
 
 export type AppConfig = z.infer<typeof configSchema>;
 
 let cached: AppConfig | undefined;
 
-export function config(): AppConfig {
-  if (!cached) {
-    const parsed = configSchema.safeParse(process.env);
-    if (!parsed.success) {
-      const problems = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`).join("; ");
-      throw new Error(`invalid configuration: ${problems}`);
-    }
-    cached = parsed.data;
+function readConfig(env: Record<string, string | undefined>): AppConfig {
+  const parsed = configSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`).join("; ");
+    throw new Error(`invalid configuration: ${problems}`);
   }
+  return parsed.data;
+}
+
+export function config(): AppConfig {
+  cached ??= readConfig(process.env);
   return cached;
 }
 
+/** Validates settings other than this process's own (start scripts, tests); throws naming each bad one. */
 export function parseConfig(env: Record<string, string | undefined>): AppConfig {
-  return configSchema.parse(env);
+  return readConfig(env);
 }

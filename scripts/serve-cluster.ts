@@ -13,6 +13,7 @@
 import cluster from "node:cluster";
 import os from "node:os";
 import path from "node:path";
+import { parseConfig } from "../lib/config";
 
 const nextBin = path.join(__dirname, "..", "node_modules/next/dist/bin/next");
 const requested = Number(process.env.HOEBENCH_APP_WORKERS);
@@ -26,7 +27,13 @@ const restarts: number[] = [];
 // Workers are plain node running Next's own CLI, without this script's TypeScript loader.
 // A larger young generation: server rendering makes many short-lived objects, and the default
 // semi-space had the collector running several times per page.
-const workerFlags = ["--max-semi-space-size=64", ...(process.env.HOEBENCH_WORKER_NODE_FLAGS ?? "").split(" ").filter(Boolean)];
+// Each worker decides a request's client address where the connection arrives (see client-address.cjs).
+const workerFlags = [
+  "--max-semi-space-size=64",
+  "--require",
+  path.join(__dirname, "client-address.cjs"),
+  ...(process.env.HOEBENCH_WORKER_NODE_FLAGS ?? "").split(" ").filter(Boolean),
+];
 cluster.setupPrimary({ exec: nextBin, args: ["start", ...process.argv.slice(2)], execArgv: workerFlags });
 
 cluster.on("exit", (worker, code, signal) => {
@@ -59,6 +66,14 @@ function stop(code = 0): void {
 
 process.on("SIGTERM", () => stop());
 process.on("SIGINT", () => stop());
+
+// A bad setting stops here, with its name, instead of surfacing later as a failing request.
+try {
+  parseConfig({ ...process.env, NODE_ENV: "production" });
+} catch (error) {
+  say((error as Error).message);
+  process.exit(1);
+}
 
 say(`serving with ${workers} app worker${workers === 1 ? "" : "s"}`);
 for (let index = 0; index < workers; index += 1) cluster.fork();

@@ -13,4 +13,11 @@ describe("configuration", () => {
   it("names each bad setting", () => {
     expect(() => parseConfig({ DATABASE_URL: "nowhere", SMTP_PORT: "99999" })).toThrow(/DATABASE_URL[\s\S]*SMTP_PORT/);
   });
+
+  it("refuses to run in production on the development secret or base address", () => {
+    expect(() => parseConfig({ NODE_ENV: "production" })).toThrow(/NEXTAUTH_SECRET[\s\S]*must be set in production[\s\S]*APP_BASE_URL/);
+    const settings = parseConfig({ NODE_ENV: "production", NEXTAUTH_SECRET: "a".repeat(32), APP_BASE_URL: "https://trials.example.org" });
+    expect(settings.TRUSTED_PROXY_HOPS).toBe(0);
+    expect(() => parseConfig({ TRUSTED_PROXY_HOPS: "-1" })).toThrow(/TRUSTED_PROXY_HOPS/);
+  });
 });

@@ -1,4 +1,5 @@
 import "server-only";
+import { clientAddressFrom } from "./client-address";
 import { hashedBucket, overLimit, recordHits, type Limit } from "@/lib/rate-limit";
 
 /** Failed sign-ins allowed in 15 minutes: per account, and per client address. */
@@ -18,11 +19,8 @@ function limitsFor(email: string, clientAddress: string): Limit[] {
   ];
 }
 
-/** The address a proxy in front of the app reports, else one shared bucket for direct clients. */
 export function clientAddressOf(headers: Record<string, string | string[] | undefined> | undefined): string {
-  const forwarded = headers?.["x-forwarded-for"];
-  const first = (Array.isArray(forwarded) ? forwarded[0] : forwarded)?.split(",")[0]?.trim();
-  return first || "direct";
+  return clientAddressFrom(headers?.["x-forwarded-for"]);
 }
 
 export async function assertSignInAllowed(email: string, clientAddress: string): Promise<void> {

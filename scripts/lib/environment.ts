@@ -58,5 +58,7 @@ export function appEnvironment(mode: Mode, database = databaseFor(mode)): Record
     MAIL_CATCHER_URL: `http://127.0.0.1:${ports.mailHttp}`,
     NEXT_TELEMETRY_DISABLED: "1",
     NEXT_DIST_DIR: mode === "test" ? testStateName(".next-test") : ".next",
+    // Test clients play the proxy in front of the app: the address they forward is believed.
+    ...(mode === "test" ? { TRUSTED_PROXY_HOPS: "1" } : {}),
   };
 }

@@ -53,7 +53,7 @@ export async function serveApp(mode: "start" | "dev" | "test", env: Record<strin
   const listen = ["-p", String(port), "-H", "127.0.0.1"];
   let child: ChildProcess;
   if (mode === "dev") {
-    child = startChild("the app", process.execPath, [nextBin, "dev", ...listen], { ...env, NODE_ENV: "development" }, projectRoot);
+    child = startChild("the app", process.execPath, ["--require", path.join(projectRoot, "scripts/client-address.cjs"), nextBin, "dev", ...listen], { ...env, NODE_ENV: "development" }, projectRoot);
   } else {
     const workers = options.workers ?? (mode === "test" ? 1 : undefined);
     const workerEnv: Record<string, string> = workers ? { HOEBENCH_APP_WORKERS: String(workers) } : {};
