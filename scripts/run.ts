@@ -26,13 +26,14 @@ function printWelcome(port: number): void {
 }
 
 async function serve(mode: "start" | "dev"): Promise<void> {
+  // From the first step: Ctrl-C while the database or the fakes come up stops what has started.
+  process.on("SIGINT", () => shutdown(0));
+  process.on("SIGTERM", () => shutdown(0));
   const env = await bringUp(mode);
   await startFakes(mode, env);
   if (mode === "start") buildApp(env);
   await serveApp(mode, env);
   printWelcome(portsFor(mode).app);
-  process.on("SIGINT", () => shutdown(0));
-  process.on("SIGTERM", () => shutdown(0));
   await new Promise(() => {});
 }
 
@@ -46,8 +47,9 @@ async function test(args: string[]): Promise<void> {
   // --server: serve the app for HTTP-level suites without running the browser tests.
   const withServer = runBrowser || args.includes("--server");
   if (runBrowser) ensureDebianPackages("/usr/bin/chromium", ["chromium"]);
-  const env = await bringUp("test");
   process.on("SIGINT", () => shutdown(130));
+  process.on("SIGTERM", () => shutdown(143));
+  const env = await bringUp("test");
   await startFakes("test", env);
   if (withServer) {
     buildApp(env);
