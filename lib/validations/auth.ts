@@ -44,3 +44,21 @@ export const createUserSchema = z
 
 export type RegisterInput = z.input<typeof registerSchema>;
 export type CreateUserInput = z.input<typeof createUserSchema>;
+
+// Any origin will do: only whether the path stays on it matters.
+const PROBE_ORIGIN = "http://return-path.invalid";
+
+/**
+ * Where to go after signing in: a path on this site, or "/". Browsers read "/\host" and
+ * "//host" as other sites, so the path is resolved the way a browser would and kept only if
+ * it stays on the same origin.
+ */
+export const returnPathSchema = z
+  .string()
+  .max(2000)
+  .transform((value) => {
+    if (!value.startsWith("/") || /[\u0000-\u001f\\]/.test(value)) return "/";
+    const resolved = new URL(value, PROBE_ORIGIN);
+    return resolved.origin === PROBE_ORIGIN ? `${resolved.pathname}${resolved.search}${resolved.hash}` : "/";
+  })
+  .catch("/");

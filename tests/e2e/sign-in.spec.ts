@@ -32,6 +32,31 @@ test("an admin sees the user administration in the navigation", async ({ page })
   await nav.getByRole("link", { name: "Users" }).click();
   await expect(page.getByRole("heading", { name: "Users" })).toBeVisible();
   await expect(page.getByTestId("user-row")).toHaveCount(6);
+
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await expect(page).toHaveURL(/\/signin/);
+  await page.goto("/admin/users");
+  await expect(page).toHaveURL(/\/signin/);
+});
+
+test("after signing in, a crafted return address stays on this site; a real one is honoured", async ({ page, baseURL }) => {
+  await page.goto("/signin?callbackUrl=%2F%5Celsewhere.example%2Fphish");
+  await page.getByLabel("E-mail").fill("technician@hoebench.test");
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByRole("navigation", { name: "Main" })).toBeVisible();
+  expect(new URL(page.url()).origin).toBe(new URL(baseURL!).origin);
+
+  await page.goto("/signin?callbackUrl=%2F%2Felsewhere.example");
+  await expect(page).toHaveURL(new RegExp(`^${new URL(baseURL!).origin}/`));
+  await page.getByRole("button", { name: "Sign out" }).click();
+  // Sign-out makes its own navigation; let it land first.
+  await expect(page).toHaveURL(/\/signin/);
+  await page.goto("/signin?callbackUrl=%2Fsettings%3Ffrom%3Dmail");
+  await page.getByLabel("E-mail").fill("technician@hoebench.test");
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/settings\?from=mail$/);
 });
 
 test("a grower sees published results only", async ({ page }) => {
