@@ -11,6 +11,8 @@ export const errorStatus = {
   INVALID_INPUT: 422,
   RATE_LIMITED: 429,
   UNAVAILABLE: 503,
+  /** A fault of ours; its details go to the log, never to the client. */
+  INTERNAL: 500,
 } as const;
 
 export type ErrorCode = keyof typeof errorStatus;
@@ -42,4 +44,5 @@ export function isAppError(error: unknown): error is AppError {
 
 export const notSignedIn = () => new AppError("UNAUTHENTICATED", "Please sign in to continue.");
 export const notAllowed = (what = "do this") => new AppError("FORBIDDEN", `Your role does not allow you to ${what}.`);
+export const unexpectedFailure = () => new AppError("INTERNAL", "Something went wrong on our side. Nothing was changed; please try again.");
 export const notFound = (what = "page") => new AppError("NOT_FOUND", `That ${what} does not exist or is not visible to you.`);

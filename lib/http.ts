@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { AppError, isAppError } from "./errors";
+import { AppError, isAppError, unexpectedFailure } from "./errors";
 
 export interface ErrorBody {
   error: { code: string; message: string; fields?: { path: string; message: string }[] };
@@ -48,16 +48,11 @@ export function errorResponse(error: unknown): NextResponse<ErrorBody> {
       : isDatabaseUnavailable(error)
         ? databaseUnavailable()
         : null;
-  if (!appError) {
-    console.error("unexpected error", error);
-    return NextResponse.json(
-      { error: { code: "INTERNAL", message: "Something went wrong on our side. Nothing was changed; please try again." } },
-      { status: 500 },
-    );
-  }
+  if (!appError) console.error("unexpected error", error);
+  const known = appError ?? unexpectedFailure();
   return NextResponse.json(
-    { error: { code: appError.code, message: appError.message, ...(appError.fields ? { fields: appError.fields } : {}) } },
-    { status: appError.status },
+    { error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) } },
+    { status: known.status },
   );
 }
 

@@ -1,7 +1,7 @@
 import "server-only";
 import type { NextRequest } from "next/server";
 import { z } from "zod";
-import { AppError, type FieldProblem } from "@/lib/errors";
+import { AppError, unexpectedFailure, type ErrorCode, type FieldProblem } from "@/lib/errors";
 import { databaseUnavailable, errorResponse, fromZodError, isDatabaseUnavailable } from "@/lib/http";
 import type { Trial } from "@/models";
 import type { Permission } from "./permissions";
@@ -79,7 +79,7 @@ export function route<P extends Schema | undefined = undefined, Q extends Schema
 
 export type ActionResult<T> =
   | { ok: true; data: T }
-  | { ok: false; error: { code: string; message: string; fields?: FieldProblem[] } };
+  | { ok: false; error: { code: ErrorCode; message: string; fields?: FieldProblem[] } };
 
 /** The same order for server actions; the result is plain data a form can show. */
 export function action<S extends Schema, T>(
@@ -94,12 +94,12 @@ export function action<S extends Schema, T>(
       const trial = await authorize(user, spec.permission, await spec.trialId?.(input));
       return { ok: true, data: await handle({ user, input, trial }) };
     } catch (error) {
-      const known = error instanceof AppError ? error : isDatabaseUnavailable(error) ? databaseUnavailable() : null;
-      if (known) {
-        return { ok: false, error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) } };
+      let known = error instanceof AppError ? error : isDatabaseUnavailable(error) ? databaseUnavailable() : null;
+      if (!known) {
+        console.error("server action failed", error);
+        known = unexpectedFailure();
       }
-      console.error("server action failed", error);
-      return { ok: false, error: { code: "INTERNAL", message: "Something went wrong on our side. Nothing was changed; please try again." } };
+      return { ok: false, error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) } };
     }
   };
 }
