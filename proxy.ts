@@ -8,5 +8,5 @@ import { decodeSessionToken } from "@/lib/auth/session-token";
 export default withAuth({ pages: { signIn: "/signin" }, jwt: { decode: decodeSessionToken } });
 
 export const config = {
-  matcher: ["/((?!api|_next/static|_next/image|favicon.ico|fonts|signin|register|invite|forgot-password|reset-password|library|published).*)"],
+  matcher: ["/((?!api|_next/static|_next/image|favicon.ico|robots.txt|fonts|signin|register|invite|forgot-password|reset-password|library|published).*)"],
 };
