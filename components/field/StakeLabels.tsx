@@ -1,8 +1,10 @@
 import { qrSvg } from "@/lib/layout/qr";
+import { stakeWarningFor } from "@/lib/safety/cautions";
+import type { MethodCategory } from "@/models/Treatment";
 
 export type StakeLabelsProps = {
   trialTitle: string;
-  plots: { number: number; block: number; treatmentCode: string; url: string }[];
+  plots: { number: number; block: number; treatmentCode: string; category: MethodCategory; url: string }[];
 };
 
 /** 3 × 7 labels of 66 × 37 mm fit A4 and US Letter alike inside 8 mm page margins (Letter leaves 263 mm of height). */
@@ -12,7 +14,9 @@ const maxTitleLength = 34;
 /**
  * Printable plot stake labels, one per plot: plot number large enough to read at arm's length
  * outdoors (about 30 pt), block and treatment code (14 pt), a short trial title, and a QR code
- * that opens the plot's page on a phone. Sheets break onto new pages when printed.
+ * that opens the plot's page on a phone. A plot treated with a herbicide, flame or a machine
+ * says so in a line of bold print, for whoever walks in later. Sheets break onto new pages
+ * when printed.
  */
 export async function StakeLabels({ trialTitle, plots }: StakeLabelsProps) {
   const codes = await Promise.all(plots.map((plot) => qrSvg(plot.url)));
@@ -43,6 +47,7 @@ export async function StakeLabels({ trialTitle, plots }: StakeLabelsProps) {
                 <p className="text-[30pt] font-bold leading-none tabular-nums">{plot.number}</p>
                 <p className="mt-[1mm] text-[14pt] font-semibold">Block {plot.block}</p>
                 <p className="truncate text-[14pt] font-semibold">{plot.treatmentCode}</p>
+                {stakeWarningFor(plot.category) ? <p className="mt-[0.5mm] text-[7pt] font-bold leading-tight">⚠ {stakeWarningFor(plot.category)}</p> : null}
               </div>
             </article>
           ))}

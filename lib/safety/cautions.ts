@@ -49,3 +49,15 @@ const byCategory: Record<MethodCategory, string[]> = {
 export function cautionsFor(category: MethodCategory): string[] {
   return [...(byCategory[category] ?? [])];
 }
+
+/** A few words for a plot stake, where the full cautions do not fit: what to mind in that plot. */
+const stakeWarnings: Partial<Record<MethodCategory, string>> = {
+  chemical: "Treated plot: keep to the label's re-entry interval",
+  thermal: "Flamed plot: fire and burn risk",
+  cultivation: "Machinery: moving parts",
+  robotic: "Weeding robot: moving parts",
+};
+
+export function stakeWarningFor(category: MethodCategory): string | null {
+  return stakeWarnings[category] ?? null;
+}

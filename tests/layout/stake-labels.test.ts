@@ -3,10 +3,12 @@ import { describe, expect, it } from "vitest";
 import { StakeLabels } from "@/components/field/StakeLabels";
 import { qrSvg } from "@/lib/layout/qr";
 
+const categories = ["check", "hand", "mulch", "cultivation", "thermal", "robotic", "chemical", "other"] as const;
 const plots = Array.from({ length: 22 }, (_, index) => ({
   number: 101 + index,
   block: 1,
   treatmentCode: `T${(index % 8) + 1}`,
+  category: categories[index % 8],
   url: `https://hoebench.example/plots/${101 + index}`,
 }));
 
@@ -32,5 +34,16 @@ describe("StakeLabels", () => {
     expect(html).toContain(">T8</p>");
     expect(html).toContain("A very long trial title that will…");
     expect(html).toContain("print:break-after-page");
+  });
+
+  it("marks plots treated with a herbicide, flame or a machine, and only those", async () => {
+    const html = renderToStaticMarkup(await StakeLabels({ trialTitle: "Onion weeding", plots: plots.slice(0, 8) }));
+    const warnings = html.match(/⚠ [^<]+/g) ?? [];
+    expect(warnings).toEqual([
+      "⚠ Machinery: moving parts",
+      "⚠ Flamed plot: fire and burn risk",
+      "⚠ Weeding robot: moving parts",
+      "⚠ Treated plot: keep to the label&#x27;s re-entry interval",
+    ]);
   });
 });

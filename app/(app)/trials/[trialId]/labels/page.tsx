@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { StakeLabels } from "@/components/field/StakeLabels";
+import { Cautions } from "@/components/safety/Cautions";
 import { PrintButton } from "@/components/trials/PrintButton";
 import { TrialHeading } from "@/components/trials/TrialHeading";
 import { TrialTabs } from "@/components/trials/TrialTabs";
@@ -26,11 +27,12 @@ export default async function StakeLabelsPage({ params }: { params: Promise<{ tr
         <>
           <div className="no-print mb-4">
             <PrintButton label="Print the labels" />
+            <Cautions cautions={plan.cautions} />
           </div>
           <div data-testid="stake-labels">
             <StakeLabels
               trialTitle={trial.title}
-              plots={plan.plots.map((plot) => ({ number: plot.number, block: plot.block, treatmentCode: plot.treatmentCode, url: plotUrl(trial.id, plot.number) }))}
+              plots={plan.plots.map((plot) => ({ number: plot.number, block: plot.block, treatmentCode: plot.treatmentCode, category: plot.category, url: plotUrl(trial.id, plot.number) }))}
             />
           </div>
         </>
