@@ -21,12 +21,15 @@ export function BasicsStep({
   initial,
   sites: initialSites,
   readOnlyReason,
+  pinnedNote = null,
   canAddSite,
 }: {
   trialId: string | null;
   initial: TrialBasicsInput;
   sites: SiteOption[];
   readOnlyReason: string | null;
+  /** Set once observations exist: crop, season and planting date stay as they are. */
+  pinnedNote?: string | null;
   canAddSite: boolean;
 }) {
   const router = useRouter();
@@ -56,10 +59,11 @@ export function BasicsStep({
       <form onSubmit={handleSubmit(save)} noValidate className="space-y-4 rounded border border-soil-200 bg-white p-4" aria-label="Trial basics">
         <FormMessage message={message} />
         <fieldset disabled={disabled} className="space-y-4">
+          {pinnedNote && !disabled ? <p className="rounded border border-soil-200 bg-soil-50 p-2 text-sm text-soil-800">{pinnedNote}</p> : null}
           <TextField label="Trial title" {...register("title")} error={errorAt(errors, "title")} placeholder="Weed control in transplanted lettuce" />
           <div className="grid gap-4 sm:grid-cols-2">
-            <TextField label="Crop" {...register("crop")} error={errorAt(errors, "crop")} placeholder="Lettuce" />
-            <TextField label="Season" {...register("season")} error={errorAt(errors, "season")} inputMode="numeric" placeholder="2026" />
+            <TextField label="Crop" {...register("crop")} readOnly={Boolean(pinnedNote)} error={errorAt(errors, "crop")} placeholder="Lettuce" />
+            <TextField label="Season" {...register("season")} readOnly={Boolean(pinnedNote)} error={errorAt(errors, "season")} inputMode="numeric" placeholder="2026" />
           </div>
           <SelectField
             label="Site"
@@ -67,7 +71,7 @@ export function BasicsStep({
             error={errorAt(errors, "siteId")}
             options={[{ value: "", label: "Choose a site…" }, ...sites.map((site) => ({ value: site.id, label: `${site.name} (${site.region})` }))]}
           />
-          <TextField label="Planting date" type="date" {...register("plantingDate")} error={errorAt(errors, "plantingDate")} hint="Assessments timed in days after planting are dated from it." />
+          <TextField label="Planting date" type="date" {...register("plantingDate")} readOnly={Boolean(pinnedNote)} error={errorAt(errors, "plantingDate")} hint="Assessments timed in days after planting are dated from it." />
           <TextAreaField label="Objective" {...register("objective")} error={errorAt(errors, "objective")} rows={4} placeholder="What the trial should find out, and for whom." />
         </fieldset>
         <div className="flex flex-wrap gap-3">

@@ -8,7 +8,7 @@ import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttribu
  */
 
 const control =
-  "w-full rounded border border-soil-200 bg-white px-3 py-2 text-base focus:border-leaf-600 focus:outline-none focus:ring-2 focus:ring-leaf-100 aria-[invalid=true]:border-red-600 disabled:bg-soil-100";
+  "w-full rounded border border-soil-200 bg-white px-3 py-2 text-base focus:border-leaf-600 focus:outline-none focus:ring-2 focus:ring-leaf-100 aria-[invalid=true]:border-red-600 disabled:bg-soil-100 read-only:bg-soil-100";
 
 function Message({ id, error }: { id: string; error?: string }) {
   if (!error) return null;

@@ -13,7 +13,8 @@ import type {
 } from "@/lib/validations/trial";
 import { applyLayout, clearLayout, layoutProblem, newSeed } from "./apply-layout";
 import { assertEditable } from "./guard";
-import { assessmentsWithObservations } from "./observations";
+import { assessmentsWithObservations, hasObservations } from "./observations";
+import { pinnedDetails, pinnedDetailsRefusal } from "./edit-rules";
 
 /*
  * The writes behind each wizard step. Each step saves on its own, so a plan can be left half
@@ -44,6 +45,9 @@ export async function createTrial(ownerId: string, basics: z.output<typeof trial
 
 export async function saveBasics(trial: Trial, basics: z.output<typeof trialBasicsSchema>): Promise<Trial> {
   await assertEditable(trial, "details");
+  const changed = pinnedDetails.filter((detail) => (basics[detail] ?? null) !== (trial[detail] ?? null));
+  const pinned = changed.length > 0 ? pinnedDetailsRefusal(changed, await hasObservations(trial.id)) : null;
+  if (pinned) throw new AppError("CONFLICT", pinned);
   if (basics.siteId !== trial.siteId) {
     if (trial.status !== "draft") throw new AppError("CONFLICT", "This trial is in the field; its site can no longer change.");
     await requireSite(basics.siteId);

@@ -148,6 +148,13 @@ describe("status and edit rules against the database", () => {
       { replacements: { versionId, assessmentId: assessment.id, trialId: trial.id, ownerId } },
     );
     await writeRawValues(sequelize, versionId, [{ plotId: plot.id, quadrat: 1, value: 12 }]);
+    await trial.reload();
+    const basics = { title: trial.title, crop: trial.crop, season: trial.season, siteId: trial.siteId, objective: trial.objective, plantingDate: trial.plantingDate ?? "" };
+    expect((await refusal(saveBasics(trial, trialBasicsSchema.parse({ ...basics, plantingDate: "2031-04-02", crop: "Another crop" })))).message).toBe(
+      "Observations have been recorded in this trial, and its crop, season and planting date say what they mean; the crop and planting date can no longer change.",
+    );
+    await saveBasics(trial, trialBasicsSchema.parse({ ...basics, title: "Observation pin check, renamed", objective: "Still open" }));
+    expect((await Trial.findByPk(trial.id))!.title).toBe("Observation pin check, renamed");
     expect((await refusal(saveAssessments(trial, { assessments: [] }))).message).toMatch(/Observations have been recorded for "Weed density"; it cannot be deleted/);
     const changedUnit = { assessments: [{ ...oneAssessment.assessments[0], id: String(assessment.id), unit: "plants per m²" }] };
     expect((await refusal(saveAssessments(trial, changedUnit))).message).toMatch(/unit and quadrats can no longer change/);

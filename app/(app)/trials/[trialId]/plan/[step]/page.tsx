@@ -15,7 +15,7 @@ import { plotCount } from "@/lib/data/plots";
 import { listSites } from "@/lib/data/sites";
 import { treatmentsOf } from "@/lib/data/treatments";
 import { teamCandidates, teamOf, trialsToCopyFrom } from "@/lib/data/trials";
-import { editRefusal, randomizeRefusal } from "@/lib/trials/edit-rules";
+import { editRefusal, pinnedDetailsNote, randomizeRefusal } from "@/lib/trials/edit-rules";
 import { wizardSteps, type WizardStep } from "@/lib/trials/labels";
 import { assessmentsWithObservations, hasObservations } from "@/lib/trials/observations";
 import { trialForPage } from "@/lib/trials/page-access";
@@ -51,6 +51,7 @@ export default async function PlanStepPage({ params }: { params: Promise<{ trial
           initial={{ title: trial.title, crop: trial.crop, season: trial.season, siteId: trial.siteId, objective: trial.objective, plantingDate: trial.plantingDate ?? "" }}
           sites={sites}
           readOnlyReason={reason}
+          pinnedNote={observed ? pinnedDetailsNote : null}
           canAddSite={can(user.role, "site:manage")}
         />
       );
