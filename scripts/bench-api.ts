@@ -6,9 +6,7 @@
  * 20 connections for 20 s and stops everything it started. Contract: benchmarks.md; the last
  * stdout line is {"requestsPerSecond", "p50Ms", "p95Ms", "p99Ms", "errors", "non2xx"}.
  */
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { createHash } from "node:crypto";
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import { QueryTypes } from "sequelize";
 import { createSequelize } from "@/lib/db/sequelize";
@@ -16,6 +14,7 @@ import { DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { prepareDatabase } from "./lib/database";
 import { appEnvironment, POSTGRES_PORT, projectRoot } from "./lib/environment";
 import { ensureCluster, psql, recreateDatabase } from "./lib/postgres";
+import { buildApp } from "./lib/stack";
 import { groupCpuSeconds } from "./lib/process-cpu";
 
 // autocannon ships no types; only the parts used here.
@@ -42,28 +41,6 @@ const DATABASE = "hoebench_bench";
 const DIST = ".next-test-bench";
 const base = `http://127.0.0.1:${PORT}`;
 const log = (message: string) => process.stderr.write(`[bench:api] ${message}\n`);
-
-function sourceStamp(): string {
-  const head = spawnSync("git", ["rev-parse", "HEAD"], { cwd: projectRoot, encoding: "utf8" }).stdout;
-  const diff = spawnSync("git", ["diff", "HEAD"], { cwd: projectRoot, encoding: "utf8", maxBuffer: 1 << 28 }).stdout;
-  const untracked = spawnSync("git", ["ls-files", "--others", "--exclude-standard", "-z"], { cwd: projectRoot, encoding: "utf8" }).stdout;
-  const hash = createHash("sha256").update(head).update(diff);
-  for (const file of untracked.split("\0").filter(Boolean)) hash.update(file).update(readFileSync(path.join(projectRoot, file)));
-  return hash.digest("hex");
-}
-
-function build(env: Record<string, string>): void {
-  const stampFile = path.join(projectRoot, DIST, "hoebench-bench-stamp");
-  const stamp = sourceStamp();
-  if (existsSync(path.join(projectRoot, DIST, "BUILD_ID")) && existsSync(stampFile) && readFileSync(stampFile, "utf8") === stamp) {
-    log("reusing the production build (sources unchanged)");
-    return;
-  }
-  log("building the app for production (next build)");
-  const result = spawnSync(process.execPath, [path.join(projectRoot, "node_modules/next/dist/bin/next"), "build"], { cwd: projectRoot, env: { ...process.env, ...env }, stdio: ["ignore", 2, 2] });
-  if (result.status !== 0) throw new Error("next build failed");
-  writeFileSync(stampFile, stamp);
-}
 
 async function waitForServer(timeoutMs = 90_000): Promise<void> {
   const until = Date.now() + timeoutMs;
@@ -121,7 +98,7 @@ async function main(): Promise<void> {
     recreateDatabase(POSTGRES_PORT, DATABASE);
     const env: Record<string, string> = { ...appEnvironment("start", DATABASE), APP_BASE_URL: base, NEXTAUTH_URL: base, NEXT_DIST_DIR: DIST };
     await prepareDatabase(env.DATABASE_URL, { seed: true });
-    build(env);
+    buildApp(env);
     log(`starting next start on ${base}`);
     // Served as `npm start` serves it: several workers on one port (scripts/serve-cluster.ts).
     server = spawn(path.join(projectRoot, "node_modules/.bin/tsx"), [path.join(projectRoot, "scripts/serve-cluster.ts"), "-p", String(PORT), "-H", "127.0.0.1"], {

@@ -2,7 +2,8 @@
  * The pieces of a running Hoebench on loopback, shared by the start and test commands and
  * the benchmarks: PostgreSQL with a migrated, seeded database, the S3 and mail fakes, the app.
  */
-import { mkdirSync, rmSync } from "node:fs";
+import { createHash } from "node:crypto";
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { spawnSync, type ChildProcess } from "node:child_process";
 import { ensureCluster, ensureDatabase, recreateDatabase } from "./postgres";
@@ -36,10 +37,37 @@ export async function startFakes(mode: Mode, env: Record<string, string>): Promi
   await waitFor("the local mail catcher", () => httpOk(`http://127.0.0.1:${ports.mailHttp}/health`), 30_000);
 }
 
+/**
+ * What a build is made from: the commit, uncommitted changes, untracked files, the Node
+ * version and the settings a build reads. Null outside a git checkout: then every start builds.
+ */
+function sourceStamp(env: Record<string, string>): string | null {
+  const git = (args: string[]) => spawnSync("git", args, { cwd: projectRoot, encoding: "utf8", maxBuffer: 1 << 28 });
+  const head = git(["rev-parse", "HEAD"]);
+  if (head.status !== 0) return null;
+  const hash = createHash("sha256").update(head.stdout).update(git(["diff", "HEAD"]).stdout).update(process.version);
+  for (const [name, value] of Object.entries(env).sort()) if (name.startsWith("NEXT_")) hash.update(`${name}=${value}\n`);
+  for (const file of git(["ls-files", "--others", "--exclude-standard", "-z"]).stdout.split("\0").filter(Boolean)) {
+    const full = path.join(projectRoot, file);
+    if (existsSync(full)) hash.update(file).update(readFileSync(full));
+  }
+  return hash.digest("hex");
+}
+
+/** Builds the app for production, or reuses the last build when nothing it is made from has changed. */
 export function buildApp(env: Record<string, string>): void {
+  const dist = path.join(projectRoot, env.NEXT_DIST_DIR ?? ".next");
+  const stampFile = path.join(dist, "hoebench-source-stamp");
+  const stamp = sourceStamp(env);
+  if (stamp && existsSync(path.join(dist, "BUILD_ID")) && existsSync(stampFile) && readFileSync(stampFile, "utf8") === stamp) {
+    say("reusing the last build (nothing it is made from has changed)");
+    return;
+  }
   say("building the app (next build)");
-  const result = spawnSync(process.execPath, [nextBin, "build"], { cwd: projectRoot, env: { ...process.env, ...env }, stdio: "inherit" });
+  // Build output goes to stderr, so a benchmark's last stdout line stays its JSON.
+  const result = spawnSync(process.execPath, [nextBin, "build"], { cwd: projectRoot, env: { ...process.env, ...env }, stdio: ["ignore", 2, 2] });
   if (result.status !== 0) throw new Error("next build failed");
+  if (stamp) writeFileSync(stampFile, stamp);
 }
 
 /**
