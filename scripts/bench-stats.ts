@@ -106,10 +106,11 @@ function timeR(cases: Array<{ name: string; rows: Row[]; formula: string; siteTe
 function main(): void {
   const rcbd = rcbdRows(12, 6, 20240501);
   const rcbdMissing = rcbdRows(12, 6, 20240502, 3);
-  const combined = combinedRows(40, 12, 4, 20240503);
+  // combined_40x12x4 is 40 sites × 12 treatments × 4 blocks (issue 3); combinedRows takes (treatments, sites, blocks).
+  const combined = combinedRows(12, 40, 4, 20240503);
   const rcbdOptions: TrialOptionsInput = { design: "rcbd", response: "y", treatment: "treatment", block: "block" };
   const combinedOptions: TrialOptionsInput = { ...rcbdOptions, site: "site" };
-  console.error("synthetic data: rcbd 12 treatments x 6 blocks (72 plots); the same with 3 lost plots; combined 40 treatments x 12 sites x 4 blocks (1920 plots)");
+  console.error("synthetic data: rcbd 12 treatments x 6 blocks (72 plots); the same with 3 lost plots; combined 40 sites x 12 treatments x 4 blocks (1920 plots)");
   const results = {
     rcbd_12x6_full: medianMilliseconds(rcbd, rcbdOptions, 200, 3000),
     rcbd_missing_12x6_full: medianMilliseconds(rcbdMissing, rcbdOptions, 200, 3000),

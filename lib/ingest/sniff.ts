@@ -2,7 +2,7 @@ import type { IngestProblem } from "./types";
 
 const signatures: { bytes: number[]; name: string }[] = [
   { bytes: [0x50, 0x4b, 0x03, 0x04], name: "a spreadsheet workbook or ZIP archive (for example .xlsx)" },
-  { bytes: [0xd0, 0xcf, 0x11, 0xe0], name: "an old-style Excel workbook (.xls)" },
+  { bytes: [0xd0, 0xcf, 0x11, 0xe0], name: "an old-style spreadsheet workbook (.xls)" },
   { bytes: [0x25, 0x50, 0x44, 0x46], name: "a PDF document" },
   { bytes: [0x89, 0x50, 0x4e, 0x47], name: "a PNG image" },
   { bytes: [0xff, 0xd8, 0xff], name: "a JPEG photo" },

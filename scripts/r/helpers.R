@@ -4,7 +4,14 @@ suppressPackageStartupMessages({
   library(jsonlite)
 })
 fixture_dir <- "tests/fixtures/stats"
-write_fixture <- function(name, value, script = name) {
+# The script that is running (Rscript passes it as --file=scripts/r/<name>.R): fixtures name the
+# file that really generates them, not one derived from the fixture's own name.
+running_script <- function() {
+  file <- sub("^--file=", "", grep("^--file=", commandArgs(trailingOnly = FALSE), value = TRUE))
+  if (length(file) != 1) stop("run the fixture scripts with Rscript scripts/r/<name>.R")
+  sub("\\.R$", "", basename(file))
+}
+write_fixture <- function(name, value, script = running_script()) {
   value$generated_by <- paste0("scripts/r/", script, ".R with ", R.version.string)
   writeLines(toJSON(value, digits = NA, auto_unbox = TRUE, pretty = TRUE, null = "null", na = "null"),
              file.path(fixture_dir, paste0(name, ".json")))

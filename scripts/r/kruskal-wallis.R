@@ -25,4 +25,4 @@ write_fixture("kruskal_wallis", list(
   insectSprays = c(list(data = "insect_sprays.csv", options = list(design = "crd", response = "count", treatment = "spray")), insect),
   tiedScores = c(list(data = "kruskal_scores_crd.csv", options = list(design = "crd", response = "score", treatment = "treatment"),
                       distinctValues = length(unique(scores$score))), tied),
-  tiny = tiny), script = "kruskal-wallis")
+  tiny = tiny))

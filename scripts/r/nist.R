@@ -25,7 +25,7 @@ for (k in 1:9) {
 }
 
 # NIST StRD SiRstv and AtmWtAg (observed data; tests/fixtures/stats/nist_sirstv.csv and
-# nist_atmwtag.csv, whose header comments name the public copies they were taken from).
+# nist_atmwtag.csv, whose header comments say how they were transcribed and checked).
 # Two cross-checks are stored: R's anova(lm()) in double precision, and an exact computation
 # in which every value is scaled to an integer and shifted by a constant (so all sums below are
 # exact integers in double precision and only the final divisions round). The exact values

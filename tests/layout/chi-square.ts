@@ -1,13 +1,11 @@
-import { createRequire } from "node:module";
-
-// jstat ships no type declarations; only the one function the tests need is typed here.
-const require = createRequire(import.meta.url);
-const { jStat } = require("jstat") as { jStat: { chisquare: { cdf(x: number, degreesOfFreedom: number): number } } };
+import { chiSquareCdf } from "@/lib/stats";
 
 /**
  * Pearson's chi-square goodness-of-fit statistic summed over independent groups, each group
  * a set of observed counts against equal expected counts. Degrees of freedom add up over the
- * groups because the groups are independent samples.
+ * groups because the groups are independent samples. The p-value is the upper tail from
+ * lib/stats's chiSquareCdf, computed directly rather than as 1 - cdf (checked against R's pchisq
+ * in tests/stats/distributions.test.ts and against jstat in tests/stats/reference-libraries.test.ts).
  */
 export function pearsonUniformityTest(groups: number[][]): { statistic: number; degreesOfFreedom: number; pValue: number } {
   let statistic = 0;
@@ -18,5 +16,5 @@ export function pearsonUniformityTest(groups: number[][]): { statistic: number; 
     for (const observed of counts) statistic += (observed - expected) ** 2 / expected;
     degreesOfFreedom += counts.length - 1;
   }
-  return { statistic, degreesOfFreedom, pValue: 1 - jStat.chisquare.cdf(statistic, degreesOfFreedom) };
+  return { statistic, degreesOfFreedom, pValue: chiSquareCdf(statistic, degreesOfFreedom).upper };
 }

@@ -6,6 +6,8 @@ import os from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { analyzeTrial, StatsInputError } from "@/lib/stats";
+import { loadFixture } from "./fixture-runner";
+import { expectClose } from "./helpers";
 
 const root = path.resolve(__dirname, "../..");
 const tsx = path.join(root, "node_modules/.bin/tsx");
@@ -52,7 +54,9 @@ describe("analyze CLI bad input", () => {
 });
 
 describe("analyzeTrial option validation (same rules as the CLI)", () => {
-  const rows = [{ t: "A", y: 1 }, { t: "A", y: 2 }, { t: "B", y: 3 }, { t: "B", y: 5 }];
+  // R: anova(lm(y ~ t)) on these rows (scripts/r/option-validation.R, tests/fixtures/stats/option_validation.json).
+  const reference = loadFixture("option_validation");
+  const rows: Array<{ t: string; y: number }> = reference.t.map((t: string, index: number) => ({ t, y: reference.y[index] }));
   it("rejects invalid options with StatsInputError", () => {
     expect(() => analyzeTrial(rows, { design: "crd", response: "y", treatment: "t", alpha: 0.7 })).toThrow(StatsInputError);
     expect(() => analyzeTrial(rows, { design: "latin", response: "y", treatment: "t" })).toThrow(/latin square requires --row and --column/);
@@ -62,8 +66,14 @@ describe("analyzeTrial option validation (same rules as the CLI)", () => {
     const fromNumbers = analyzeTrial(rows, { design: "crd", response: "y", treatment: "t" });
     const fromText = analyzeTrial(rows.map((row) => ({ t: row.t, y: String(row.y) })), { design: "crd", response: "y", treatment: "t" });
     expect(fromText.anova).toEqual(fromNumbers.anova);
-    // one-way ANOVA by hand: means 1.5 and 4, SS_treatment = 2 · 2 · 1.25² = 6.25, SS_residual = 0.5 + 2 = 2.5
-    expect(fromNumbers.anova![0].ss).toBeCloseTo(6.25, 14);
-    expect(fromNumbers.anova![1].ss).toBeCloseTo(2.5, 14);
+    // R anova(lm(y ~ t)): df 1 and 2, SS 6.25 and 2.5, MS 6.25 and 1.25, F 5, p 0.154845745271483
+    const [treatment, residual] = fromNumbers.anova!;
+    expect([treatment.df, residual.df]).toEqual(reference.df);
+    expectClose(treatment.ss, reference.ss[0], 1e-14, 0, "R anova(lm(y ~ t)) Sum Sq t");
+    expectClose(residual.ss, reference.ss[1], 1e-14, 0, "R anova(lm(y ~ t)) Sum Sq Residuals");
+    expectClose(treatment.ms, reference.ms[0], 1e-14, 0, "R anova(lm(y ~ t)) Mean Sq t");
+    expectClose(residual.ms, reference.ms[1], 1e-14, 0, "R anova(lm(y ~ t)) Mean Sq Residuals");
+    expectClose(treatment.f as number, reference.f, 1e-14, 0, "R anova(lm(y ~ t)) F value");
+    expectClose(treatment.p as number, reference.p, 1e-12, 0, "R anova(lm(y ~ t)) Pr(>F)");
   });
 });

@@ -51,19 +51,18 @@ describe("R on the same NIST data (cross-check of the reconstruction)", () => {
 });
 
 // NIST StRD SiRstv (lower difficulty) and AtmWtAg (average difficulty, 7 constant leading digits):
-// observed data. The data files carry a header naming NIST and the public copies they were taken
-// from (SiRstv: negassi/SDSUWorkshop2020 SiRstv.dat, checked against bioszen/BIOSZEN
-// tests/testthat/reference-data/nist_sirstv.csv; AtmWtAg: joshday/NISTStatisticalReferenceData.jl
-// README.md, which reproduces AtmWtAg.dat, checked against the SAS PROC ORTHOREG example data).
-// Certified values as printed in the NIST files (15 significant digits).
+// observed data. The data files carry a header naming the NIST dataset; each was transcribed from
+// a public copy of the NIST .dat file and checked value by value against a second, independent
+// copy. Certified values as printed in the NIST files SiRstv.dat and AtmWtAg.dat (15 significant
+// digits); the exact-sum test below reproduces every one of them from the transcribed data.
 const certifiedObserved: Record<string, { dfBetween: number; ssBetween: number; msBetween: number; f: number; dfWithin: number; ssWithin: number; msWithin: number; rSquared: number; residualSd: number }> = {
-  // bioszen/BIOSZEN tests/testthat/test-statistical-reference-validation.R (quoting SiRstv.dat)
+  // NIST StRD SiRstv.dat, certified values
   SiRstv: {
     dfBetween: 4, ssBetween: 5.11462616000000e-2, msBetween: 1.27865654000000e-2, f: 1.18046237440255,
     dfWithin: 20, ssWithin: 2.16636560000000e-1, msWithin: 1.08318280000000e-2,
     rSquared: 1.90999039051129e-1, residualSd: 1.04076068334656e-1,
   },
-  // joshday/NISTStatisticalReferenceData.jl README.md (AtmWtAg.dat lines 41-47)
+  // NIST StRD AtmWtAg.dat, certified values (lines 41-47 of the .dat)
   AtmWtAg: {
     dfBetween: 1, ssBetween: 3.63834187500000e-9, msBetween: 3.63834187500000e-9, f: 1.59467335677930e1,
     dfWithin: 46, ssWithin: 1.04951729166667e-8, msWithin: 2.28155932971014e-10,

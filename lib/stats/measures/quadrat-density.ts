@@ -10,8 +10,7 @@ import { compensatedSum } from "../core/compensated-sum";
  * Assumptions: at least one quadrat, area > 0; quadrats of equal size.
  *
  * Reference: Burrill, L. C., Cárdenas, J. & Locatelli, E. (1976) Field
- * Manual for Weed Control Research. International Plant Protection Center,
- * Oregon State University.
+ * Manual for Weed Control Research (quadrat counts of weed density).
  *
  * @example
  * quadratDensity([12, 8, 10, 14], 0.25) // 44
