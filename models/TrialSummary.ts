@@ -9,6 +9,7 @@ export class TrialSummary extends Model<InferAttributes<TrialSummary>, InferCrea
   declare trialId: string;
   declare editedText: string | null;
   declare publishedText: string | null;
+  /** While drafting, the generated text the edit was made against (to spot results that changed since); once published, the text generated then. */
   declare generatedText: string | null;
   declare numbers: unknown;
   declare publishedAt: Date | null;

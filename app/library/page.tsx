@@ -80,6 +80,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
               <p className="mt-1 text-sm">Methods: {trial.methods.map((method) => method.name).join(", ")}</p>
               <p className="mt-2 flex flex-wrap gap-3 text-sm">
                 <Link href={`/library/${trial.id}`} className="text-leaf-700 underline">Read the summary</Link>
+                <a href={`/api/library/${trial.id}/report`} className="text-leaf-700 underline" download>Technical report (PDF)</a>
                 <a href={`/api/library/${trial.id}/data`} className="text-leaf-700 underline">Download the data (CSV)</a>
               </p>
             </li>

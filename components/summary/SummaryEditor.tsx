@@ -12,31 +12,47 @@ interface Props {
   initialText: string;
   generatedText: string;
   edited: boolean;
+  /** The edit was made before the results last changed: its numbers may be out of date. */
+  generatedChangedSinceEdit: boolean;
   canPublish: boolean;
   status: string;
 }
 
 /** Edit the generated words, preview them as growers will see them, save, and publish. */
-export function SummaryEditor({ trialId, initialText, generatedText, edited: initiallyEdited, canPublish, status }: Props) {
+export function SummaryEditor({ trialId, initialText, generatedText: initialGenerated, edited: initiallyEdited, generatedChangedSinceEdit, canPublish, status }: Props) {
   const router = useRouter();
   const [text, setText] = useState(initialText);
   const [saved, setSaved] = useState(initialText);
   const [edited, setEdited] = useState(initiallyEdited);
+  const [generatedText, setGeneratedText] = useState(initialGenerated);
+  const [stale, setStale] = useState(generatedChangedSinceEdit);
+  // The generated text the words in the box were written against; unknown (null) while a stale edit is unresolved.
+  const [basedOn, setBasedOn] = useState<string | null>(generatedChangedSinceEdit ? null : initialGenerated);
   const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const [confirming, setConfirming] = useState(false);
   const [published, setPublished] = useState<string | null>(null);
   const dirty = text !== saved;
 
-  async function save(next: string | null) {
+  async function save(next: string | null, against: string | null = basedOn) {
     setBusy(true);
-    const result = await callApi<{ text: string; edited: boolean }>(`/api/summaries/${trialId}`, { method: "PUT", json: { text: next } });
+    const json = next !== null && against !== null ? { text: next, basedOn: against } : { text: next };
+    const result = await callApi<{ text: string; generatedText: string; edited: boolean; generatedChangedSinceEdit: boolean }>(`/api/summaries/${trialId}`, { method: "PUT", json });
     setBusy(false);
     if (!result.ok) return setMessage({ tone: "error", text: result.error.fields?.[0]?.message ?? result.error.message });
     setText(result.data.text);
     setSaved(result.data.text);
     setEdited(result.data.edited);
+    setGeneratedText(result.data.generatedText);
+    setStale(result.data.generatedChangedSinceEdit);
+    setBasedOn(result.data.generatedChangedSinceEdit ? null : result.data.generatedText);
     setMessage({ tone: "ok", text: next === null ? "Back to the generated text." : "Saved." });
+  }
+
+  function takeNewGeneratedText() {
+    setText(generatedText);
+    setBasedOn(generatedText);
+    setMessage({ tone: "ok", text: "The new generated text is in the box. Add back any changes of your own, then save." });
   }
 
   async function publish() {
@@ -53,6 +69,28 @@ export function SummaryEditor({ trialId, initialText, generatedText, edited: ini
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <div>
+        {stale && (
+          <div role="alert" className="mb-3 rounded border-2 border-amber-700 bg-amber-50 p-3 text-sm text-amber-900" data-testid="summary-stale">
+            <p className="font-semibold">The generated text has changed since this summary was edited.</p>
+            <p className="mt-1">
+              The trial’s data or results changed after the edit, so the edited text may quote numbers that no longer hold. Compare it with the new generated text before publishing.
+            </p>
+            <details className="mt-2">
+              <summary className="cursor-pointer underline">Show the new generated text</summary>
+              <div className="mt-2 rounded border border-soil-200 bg-white p-3 text-soil-900">
+                <SummaryText text={generatedText} />
+              </div>
+            </details>
+            <div className="mt-2 flex flex-wrap gap-2">
+              <Button type="button" disabled={busy} onClick={takeNewGeneratedText}>
+                Take the new generated text
+              </Button>
+              <Button type="button" variant="secondary" disabled={busy} onClick={() => save(text, generatedText)}>
+                Keep my text: I have checked its numbers
+              </Button>
+            </div>
+          </div>
+        )}
         <label htmlFor="summary-text" className="mb-1 block font-medium">
           Summary text
         </label>
@@ -83,7 +121,9 @@ export function SummaryEditor({ trialId, initialText, generatedText, edited: ini
         )}
         <div className="mt-4 rounded border border-soil-200 bg-white p-4">
           <h2 className="mb-1 font-semibold">Publish</h2>
-          {canPublish && !published ? (
+          {canPublish && !published && stale ? (
+            <p className="text-sm text-soil-700">Publishing waits until the edited text has been checked against the new results (see the warning above).</p>
+          ) : canPublish && !published ? (
             confirming ? (
               <div className="space-y-2 text-sm">
                 <p>Publishing makes the trial, this text and its data public and cannot be undone here. {dirty ? "Your unsaved changes will not be published; save first." : ""}</p>

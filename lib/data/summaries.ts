@@ -121,12 +121,22 @@ export async function summaryNumbersOf(trial: Trial): Promise<SummaryNumbers> {
   };
 }
 
+/**
+ * An edit made against other generated text than `generatedNow` may quote numbers that have
+ * changed since; an edit whose starting text was not kept counts as such, since nobody can tell.
+ */
+export function editIsStale(record: Pick<TrialSummary, "editedText" | "generatedText"> | null, generatedNow: string): boolean {
+  return Boolean(record?.editedText) && record!.generatedText !== generatedNow;
+}
+
 export interface SummaryView {
   numbers: SummaryNumbers;
   generated: GeneratedSummary;
   /** The text readers see: published text, else the researcher's edit, else the generated text. */
   text: string;
   edited: boolean;
+  /** A draft's edit was made before the results (so the generated text) last changed. */
+  generatedChangedSinceEdit: boolean;
   published: { at: Date; text: string } | null;
   record: TrialSummary | null;
 }
@@ -141,9 +151,17 @@ export async function summaryOf(trial: Trial): Promise<SummaryView> {
   if (record?.publishedText && record.numbers) {
     const numbers = record.numbers as SummaryNumbers;
     const generated = generateSummary(numbers.input);
-    return { numbers, generated, text: record.publishedText, edited: record.publishedText !== record.generatedText, published: { at: record.publishedAt!, text: record.publishedText }, record };
+    return { numbers, generated, text: record.publishedText, edited: record.publishedText !== record.generatedText, generatedChangedSinceEdit: false, published: { at: record.publishedAt!, text: record.publishedText }, record };
   }
   const numbers = await summaryNumbersOf(trial);
   const generated = generateSummary(numbers.input);
-  return { numbers, generated, text: record?.editedText ?? generated.text, edited: Boolean(record?.editedText), published: null, record };
+  return {
+    numbers,
+    generated,
+    text: record?.editedText ?? generated.text,
+    edited: Boolean(record?.editedText),
+    generatedChangedSinceEdit: editIsStale(record, generated.text),
+    published: null,
+    record,
+  };
 }

@@ -32,6 +32,7 @@ export const demoSites = [
   },
 ] as const;
 
+/** Each trial's status once seeded; a "published" one is published by the seed through the app's own path (./seed.ts). */
 export const demoTrials = [
   {
     key: "lettuce-tamsel",

@@ -1,3 +1,6 @@
+import { execFile } from "node:child_process";
+import path from "node:path";
+import { promisify } from "node:util";
 import type { Sequelize } from "sequelize";
 import { hashPassword } from "@/lib/auth/password";
 import { randomizeLayout } from "@/lib/layout/randomize";
@@ -5,10 +8,38 @@ import { Assessment, Membership, Plot, Site, Treatment, Trial, User } from "@/mo
 import { seedDemoObservations } from "./demo-observations";
 import { demoMemberships, demoProtocols, demoSites, demoTrials, demoUsers, DEMO_PASSWORD } from "./scenario";
 
+/** A connection's database as a URL, so a child process reaches the same one. */
+function databaseUrlOf(sequelize: Sequelize): string {
+  const { username, password, host, port, database } = sequelize.config;
+  const credentials = `${encodeURIComponent(username)}${password ? `:${encodeURIComponent(password)}` : ""}`;
+  return `postgres://${credentials}@${host}:${port}/${encodeURIComponent(database)}`;
+}
+
+/*
+ * The seed runs in plain Node (tsx), outside Next's server build: there modules marked
+ * server-only refuse to load, and db() would open the configured database rather than the one
+ * being seeded. Publishing goes through the app's own path all the same, in a child process
+ * under the react-server condition (as bench:load runs) pointed at this database.
+ */
+async function publishDemoTrials(sequelize: Sequelize, trialIds: string[]): Promise<void> {
+  if (trialIds.length === 0) return;
+  const root = path.resolve(__dirname, "../..");
+  try {
+    await promisify(execFile)(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", path.join(__dirname, "publish-demo-trials.ts"), ...trialIds], {
+      cwd: root,
+      env: { ...process.env, DATABASE_URL: databaseUrlOf(sequelize), DATABASE_POOL_MAX: "2" },
+    });
+  } catch (error) {
+    const stderr = (error as { stderr?: string }).stderr?.trim();
+    throw new Error(stderr || (error as Error).message);
+  }
+}
+
 /** Seeds the demo into an empty database; a database with any user is left as it is. */
 export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "already-present"> {
   if ((await User.count()) > 0) return "already-present";
   const passwordHash = await hashPassword(DEMO_PASSWORD);
+  const toPublish: string[] = [];
   await sequelize.transaction(async (transaction) => {
     const users = new Map<string, User>();
     for (const demo of demoUsers) {
@@ -21,6 +52,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "alread
     }
     const trials = new Map<string, Trial>();
     for (const demo of demoTrials) {
+      // A trial the demo shows as published starts locked, as if signed off, and is published below like any other.
+      const status = demo.status === "published" ? "locked" : demo.status;
       trials.set(
         demo.key,
         await Trial.create(
@@ -39,7 +72,7 @@ export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "alread
             plantingDate: demo.plantingDate,
             randomSeed: demo.randomSeed,
             serpentine: demoProtocols[demo.key]?.serpentine ?? false,
-            status: demo.status,
+            status,
             ownerId: users.get(demo.owner)!.id,
           },
           { transaction },
@@ -66,6 +99,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "alread
       await Membership.create({ trialId: trials.get(demo.trial)!.id, userId: users.get(demo.user)!.id, role: demo.role }, { transaction });
     }
     await seedDemoObservations(sequelize, transaction);
+    toPublish.push(...demoTrials.filter((demo) => demo.status === "published").map((demo) => trials.get(demo.key)!.id));
   });
+  await publishDemoTrials(sequelize, toPublish);
   return "seeded";
 }

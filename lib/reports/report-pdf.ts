@@ -2,7 +2,10 @@ import PDFDocument from "pdfkit";
 import SVGtoPDF from "svg-to-pdfkit";
 import { renderPlotMapSvg } from "@/components/field/PlotMap";
 import { num, pValue, sourceLabels } from "@/components/results/format";
+import { cautionsForCategories } from "@/lib/safety/trial-cautions";
+import { scopeCaveat } from "@/lib/summaries/generate";
 import { designNames } from "@/lib/trials/labels";
+import type { MethodCategory } from "@/lib/trials/vocabulary";
 import type { TrialReport } from "./report-data";
 import { meansChartSvg } from "./means-svg";
 
@@ -57,6 +60,16 @@ function paragraph(doc: PDFKit.PDFDocument, text: string, size = 9.5) {
   doc.font("Helvetica").fontSize(size).fillColor(ink).text(plain(text), margin, doc.y, { width: doc.page.width - 2 * margin });
 }
 
+/**
+ * The report's safety and scope lines: the same cautions as maps, sheets and the summary
+ * (lib/safety), each once with the governing rule last, then the summary's own words on where
+ * the results come from and that they are not a recommendation. The library links the report
+ * to the public, so it must carry them as the summary does.
+ */
+export function reportSafetyLines(categories: readonly MethodCategory[], siteName: string, season: string): { cautions: string[]; scope: string } {
+  return { cautions: cautionsForCategories(categories), scope: scopeCaveat(1, siteName, season) };
+}
+
 /** The technical report as an A4 PDF: the same content as the printable page, charts drawn from SVG made from the numbers. */
 export async function trialReportPdf(report: TrialReport, options: { compress?: boolean } = {}): Promise<Buffer> {
   const { overview, treatments, plan, sections, review } = report;
@@ -73,6 +86,12 @@ export async function trialReportPdf(report: TrialReport, options: { compress?: 
 
   heading(doc, "Treatments");
   table(doc, ["Code", "Treatment", "Timing", "Settings"], treatments.map((treatment) => [treatment.code, treatment.name, treatment.timing, treatment.rateOrSettings]), [40, 150, 160, width - 350], ["left", "left", "left", "left"]);
+
+  const safety = reportSafetyLines(treatments.map((treatment) => treatment.category), overview.site.name, trial.season);
+  heading(doc, safety.cautions.length > 0 ? "Safety and scope" : "Scope");
+  for (const caution of safety.cautions) paragraph(doc, `• ${caution}`);
+  if (safety.cautions.length > 0) doc.moveDown(0.3);
+  paragraph(doc, safety.scope);
 
   if (plan.plots.length > 0) {
     heading(doc, "Plot map");

@@ -8,7 +8,10 @@ import type { Range, WeedFinding, WeedResult, YieldFinding, YieldResult } from "
  * from the engine's pairwise comparisons. "Detected" means that range excludes zero (the same
  * as Fisher's LSD test at 1 − level), so the words never contradict the range printed beside
  * them. Percent control's range is the difference range divided by the weedy check's lsmean,
- * taking the check mean as known: a simple, slightly narrow range, stated as such on the page.
+ * taking the check mean as known: a simple, slightly narrow range. A ratio (Fieller) interval
+ * needs the covariance of the two lsmeans, which the engine does not report (it matters once
+ * plots are lost), so the summary's words say the range is narrow instead (generate.ts,
+ * rangeMeaning).
  */
 
 export interface Difference {

@@ -1,4 +1,4 @@
-import { perHectareToPerAcre, tonnesPerHectareToPoundsPerAcre } from "@/lib/economics/units";
+import { measureIn, perHectareToPerAcre, tonnesPerHectareToPoundsPerAcre } from "@/lib/economics/units";
 
 /** Whole percent, with a true minus sign; -0 reads as 0. */
 export function percent(value: number): string {
@@ -25,6 +25,18 @@ export function number(value: number, digits = 1): string {
 /** A yield in both systems: "2.4 t/ha (2,141 lb/acre)". */
 export function yieldBoth(tonnesPerHa: number): string {
   return `${number(tonnesPerHa, 2)} t/ha (${number(tonnesPerHectareToPoundsPerAcre(tonnesPerHa), 0)} lb/acre)`;
+}
+
+/**
+ * A weed density or biomass in both systems: "12 plants/m² (1.1 plants/ft²)". The text is
+ * stored and read without the page's unit switch, so it carries both; a unit the units
+ * module does not convert is given once.
+ */
+export function measureBoth(value: number, unit: string): string {
+  const us = measureIn(value, unit, "us");
+  const metricText = `${number(value, 1)} ${unit}`;
+  if (us.unit === unit) return metricText;
+  return `${metricText} (${number(us.value, us.value < 100 ? 1 : 0)} ${us.unit})`;
 }
 
 /** Money per area in both systems, acre first for growers who farm in acres. */

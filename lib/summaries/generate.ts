@@ -1,6 +1,6 @@
 import { cautionsFor } from "@/lib/safety/cautions";
-import { hoursPerAreaBoth, list, money, moneyPerAreaBoth, number, percent, percentRangeText, yieldBoth } from "./format";
-import type { GeneratedSummary, SummaryInput, SummaryMethod, SummarySection, WeedResult, YieldResult } from "./types";
+import { hoursPerAreaBoth, list, measureBoth, money, moneyPerAreaBoth, number, percent, percentRangeText, yieldBoth } from "./format";
+import type { GeneratedSummary, SummaryInput, SummaryMethod, SummarySection, WeedFinding, WeedResult, YieldResult } from "./types";
 
 /*
  * The plain-language summary of a trial, from reviewed results. Wording rules (tested in
@@ -20,9 +20,12 @@ function comparedMethods(input: SummaryInput): SummaryMethod[] {
   return input.methods.filter((method) => method.checkType === null);
 }
 
-function rangeMeaning(input: SummaryInput): string {
+function rangeMeaning(input: SummaryInput, weeds: WeedFinding): string {
   const level = Math.round(input.confidence * 100);
-  return `Each range is a ${level}% confidence range: plots given one method differ from each other, and given that variation the true effect at this site is likely to lie within the range. A wider range means a less certain result.`;
+  const meaning = `Each range is a ${level}% confidence range: plots given one method differ from each other, and given that variation the true effect at this site is likely to lie within the range. A wider range means a less certain result.`;
+  if (!weeds.results.some((result) => result.percentRange)) return meaning;
+  // Percent ranges divide by the weedy check's average as if it were known (lib/summaries/findings.ts); say so.
+  return `${meaning} The percent ranges allow for the variation between plots in the difference from no weeding, but take the average without weeding as exact; that average is an estimate too, so the true ranges are somewhat wider than shown.`;
 }
 
 function comparedSection(input: SummaryInput): SummarySection {
@@ -58,7 +61,14 @@ function weedSentence(input: SummaryInput, result: WeedResult, referenceCode: st
   const range = result.percentRange ? percentRangeText(result.percentRange.low, result.percentRange.high) : null;
   let sentence: string;
   if (!result.detected) {
-    sentence = `${name}: no clear difference from no weeding in this trial. Weeds were ${percent(result.percentControl)} fewer on average${range ? `, but the range (${range}) includes no reduction at all` : ""}.`;
+    const rounded = Math.round(result.percentControl);
+    const average =
+      rounded > 0
+        ? `Weeds were ${percent(result.percentControl)} fewer on average${range ? `, but the range (${range}) includes no reduction at all` : ""}`
+        : rounded < 0
+          ? `There were ${percent(-result.percentControl)} more weeds on average${range ? `, but the range of control (${range}) includes no change at all` : ""}`
+          : `On average, weeds were within 1% of no weeding${range ? ` (range of control ${range})` : ""}`;
+    sentence = `${name}: no clear difference from no weeding in this trial. ${average}.`;
   } else if (result.percentControl > 0) {
     sentence = `${name} reduced weeds by about ${percent(result.percentControl)} compared with no weeding${range ? ` (range ${range})` : ""}.`;
   } else {
@@ -66,6 +76,8 @@ function weedSentence(input: SummaryInput, result: WeedResult, referenceCode: st
   }
   if (referenceCode && result.code !== referenceCode && result.similarToReference === true && marginPoints !== null) {
     sentence += ` Its weed control was similar to ${nameOf(input, referenceCode).toLowerCase()}: an equivalence test placed the difference within ${number(marginPoints, 0)} percentage points of control either way.`;
+  } else if (referenceCode && result.code !== referenceCode && result.similarToReference === false && marginPoints !== null) {
+    sentence += ` The trial could not show that its weed control was within ${number(marginPoints, 0)} percentage points of ${nameOf(input, referenceCode).toLowerCase()} either way.`;
   }
   return sentence;
 }
@@ -81,9 +93,9 @@ function weedsSection(input: SummaryInput): SummarySection | null {
     key: "weeds",
     heading: "Weeds",
     paragraphs: [
-      `${what} ${when}. Without weeding there were ${number(weeds.checkMean, 1)} ${weeds.unit} on average.`,
+      `${what} ${when}. Without weeding there were ${measureBoth(weeds.checkMean, weeds.unit)} on average.`,
       ...results.map((result) => weedSentence(input, result, weeds.reference?.code ?? null, weeds.reference?.marginPoints ?? null)),
-      rangeMeaning(input),
+      rangeMeaning(input, weeds),
     ],
   };
 }
@@ -138,14 +150,17 @@ function costsSection(input: SummaryInput): SummarySection | null {
   };
 }
 
+/** Where the results come from and that they are not a recommendation; the technical report prints the same words. */
+export function scopeCaveat(sites: number, siteName: string, season: string): string {
+  return sites === 1
+    ? `These results are from one trial at one site in one season (${siteName}, ${season}). Weeds, soil and weather differ between farms and years, so treat them as one piece of evidence, not a recommendation.`
+    : `These results come from ${sites} sites in one season. They are stronger evidence than a single trial, but weeds, soil and weather still differ between farms and years; they are not a recommendation.`;
+}
+
 function caveatsSection(input: SummaryInput): SummarySection {
   const hazardous = comparedMethods(input).filter((method) => cautionsFor(method.category).length > 0);
   const paragraphs: string[] = [];
-  paragraphs.push(
-    input.sites === 1
-      ? `These results are from one trial at one site in one season (${input.trial.siteName}, ${input.trial.season}). Weeds, soil and weather differ between farms and years, so treat them as one piece of evidence, not a recommendation.`
-      : `These results come from ${input.sites} sites in one season. They are stronger evidence than a single trial, but weeds, soil and weather still differ between farms and years; they are not a recommendation.`,
-  );
+  paragraphs.push(scopeCaveat(input.sites, input.trial.siteName, input.trial.season));
   if (hazardous.length > 0) {
     paragraphs.push(
       `${list(hazardous.map((method) => method.name))} ${hazardous.length === 1 ? "carries" : "carry"} safety risks; read the cautions below. The product label and local regulations govern, not this summary.`,

@@ -73,6 +73,14 @@ describe("the public library", () => {
     expect(html).toContain("one trial at one site");
     expect(html).toContain(`/api/library/${publishedDemoId}/data`);
     expect(html).toContain("The product label and local regulations govern");
+    // The seed published it through the app's path, so the page reads the stored summary and its date.
+    const record = (await TrialSummary.findOne({ where: { trialId: publishedDemoId } }))!;
+    expect(html).toContain(`published ${record.publishedAt!.toISOString().slice(0, 10)}`);
+  });
+
+  it("links each library entry to its summary, technical report and data", async () => {
+    const html = await (await new TestClient().request("/library?crop=onion")).text();
+    for (const link of [`/library/${publishedDemoId}`, `/api/library/${publishedDemoId}/report`, `/api/library/${publishedDemoId}/data`]) expect(html).toContain(`href="${link}"`);
   });
 });
 

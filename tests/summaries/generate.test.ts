@@ -103,8 +103,50 @@ describe("plain-language summary wording", () => {
     expect(check).not.toContain("similar");
   });
 
-  it("states what the ranges mean", () => {
-    expect(generateSummary(input()).text).toContain("Each range is a 95% confidence range");
+  it("a rise in weeds the analysis did not detect says 'more weeds', not 'fewer'", () => {
+    const weeds = { ...input().weeds!, results: [weed({ code: "SM", percentControl: -5.4, percentRange: { low: -30, high: 19 }, detected: false })] };
+    const mulch = paragraph(generateSummary(input({ weeds })), "Straw mulch");
+    expect(mulch).toBe("Straw mulch: no clear difference from no weeding in this trial. There were 5% more weeds on average, but the range of control (−30% to 19%) includes no change at all.");
+    expect(mulch).not.toContain("fewer");
+  });
+
+  it("an average change under 1% is said to be under 1%, not '0% fewer'", () => {
+    const weeds = { ...input().weeds!, results: [weed({ code: "SM", percentControl: 0.3, percentRange: { low: -20, high: 21 }, detected: false })] };
+    expect(paragraph(generateSummary(input({ weeds })), "Straw mulch")).toBe(
+      "Straw mulch: no clear difference from no weeding in this trial. On average, weeds were within 1% of no weeding (range of control −20% to 21%).",
+    );
+  });
+
+  it("weed control not shown equivalent says the trial could not show it, and never 'similar'", () => {
+    const weeds = { ...input().weeds!, results: [weed({ code: "FL", percentControl: 62, percentRange: { low: 48, high: 76 }, detected: true, similarToReference: false })] };
+    const flame = paragraph(generateSummary(input({ weeds })), "Flame weeding reduced");
+    expect(flame).toBe(
+      "Flame weeding reduced weeds by about 62% compared with no weeding (range 48% to 76%). The trial could not show that its weed control was within 10 percentage points of hand hoeing either way.",
+    );
+    expect(flame).not.toContain("similar");
+  });
+
+  it("weed density is given in plants/m² and plants/ft²", () => {
+    // 120 plants/m² × 0.09290304 m²/ft² (1 ft = 0.3048 m exactly; NIST SP 811, Appendix B) = 11.148 plants/ft²
+    expect(paragraph(generateSummary(input()), "Weeds were counted")).toBe("Weeds were counted 42 days after planting. Without weeding there were 120 plants/m² (11.1 plants/ft²) on average.");
+  });
+
+  it("weed biomass is given in g/m² and lb/acre", () => {
+    const weeds = { ...input().weeds!, measure: "weed-biomass" as const, unit: "g/m²" };
+    // 120 g/m² = 1 200 kg/ha; × 0.40468564224 ha/acre ÷ 0.45359237 kg/lb (NIST SP 811, Appendix B) = 1 070.6 lb/acre
+    expect(paragraph(generateSummary(input({ weeds })), "Weeds were cut and weighed")).toBe(
+      "Weeds were cut and weighed 42 days after planting. Without weeding there were 120 g/m² (1,071 lb/acre) on average.",
+    );
+  });
+
+  it("states what the ranges mean, and that percent ranges take the weedy check's average as exact", () => {
+    const text = generateSummary(input()).text;
+    expect(text).toContain("Each range is a 95% confidence range");
+    expect(text).toContain(
+      "The percent ranges allow for the variation between plots in the difference from no weeding, but take the average without weeding as exact; that average is an estimate too, so the true ranges are somewhat wider than shown.",
+    );
+    const noRanges = { ...input().weeds!, results: input().weeds!.results.map((result) => ({ ...result, percentRange: null })) };
+    expect(generateSummary(input({ weeds: noRanges })).text).not.toContain("percent ranges");
   });
 
   it("one trial at one site is said to be one trial at one site", () => {

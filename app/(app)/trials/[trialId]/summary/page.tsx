@@ -43,7 +43,7 @@ export default async function TrialSummaryPage({ params }: { params: Promise<{ t
         </p>
       )}
       {canEdit ? (
-        <SummaryEditor trialId={trial.id} initialText={view.text} generatedText={view.generated.text} edited={view.edited} canPublish={canPublish} status={trial.status} />
+        <SummaryEditor trialId={trial.id} initialText={view.text} generatedText={view.generated.text} edited={view.edited} generatedChangedSinceEdit={view.generatedChangedSinceEdit} canPublish={canPublish} status={trial.status} />
       ) : (
         <div className="rounded border border-soil-200 bg-white p-4">
           <SummaryText text={view.text} />
