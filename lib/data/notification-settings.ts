@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import type { NotificationType } from "@/lib/notifications/events";
 import { notificationTypeKeys } from "@/lib/notifications/types";
@@ -11,10 +12,13 @@ export interface NotificationPreferences {
 
 export const defaultPreferences: NotificationPreferences = { delivery: "immediate", muted: [] };
 
-/** A person's notification choices; without a saved row, every notice as its own mail. */
-export async function notificationPreferencesFor(userId: string): Promise<NotificationPreferences> {
+/**
+ * A person's notification choices; without a saved row, every notice as its own mail.
+ * Notices queued inside an action's transaction read through it, on its connection.
+ */
+export async function notificationPreferencesFor(userId: string, options: { transaction?: Transaction } = {}): Promise<NotificationPreferences> {
   db();
-  const row = await NotificationSetting.findByPk(userId);
+  const row = await NotificationSetting.findByPk(userId, { transaction: options.transaction });
   if (!row) return { ...defaultPreferences };
   const known = new Set<string>(notificationTypeKeys);
   return { delivery: row.delivery, muted: row.mutedTypes.filter((type): type is NotificationType => known.has(type)) };

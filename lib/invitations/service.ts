@@ -1,6 +1,7 @@
 import "server-only";
-import { Op, QueryTypes, UniqueConstraintError } from "sequelize";
+import { Op, QueryTypes, UniqueConstraintError, type Transaction } from "sequelize";
 import { hashPassword } from "@/lib/auth/password";
+import type { Role } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session";
 import { db } from "@/lib/db/sequelize";
 import { AppError } from "@/lib/errors";
@@ -37,9 +38,35 @@ export function refusalFor(state: Exclude<InvitationState, "pending">, inviterNa
 
 export const unknownLink = () => new AppError("NOT_FOUND", "This invitation link is not valid. Check that you opened the whole link from the e-mail, or ask for a new one.");
 
-async function sendInvitationMail(invitation: Invitation, token: string, trial: Trial, inviterName: string): Promise<void> {
-  await queueMail({ kind: "invitation", to: invitation.email, ...invitationMail({ token, trialTitle: trial.title, crop: trial.crop, role: invitation.role, inviterName, expiresAt: invitation.expiresAt }) });
-  wakeMailWorker();
+/** Queued in the transaction that stores the token, so a stored link always has its mail on the way. */
+async function queueInvitationMail(invitation: Invitation, token: string, trial: Trial, inviterName: string, transaction: Transaction): Promise<void> {
+  await queueMail(
+    { kind: "invitation", to: invitation.email, ...invitationMail({ token, trialTitle: trial.title, crop: trial.crop, role: invitation.role, inviterName, expiresAt: invitation.expiresAt }) },
+    { transaction },
+  );
+}
+
+const invitableRoles: readonly Role[] = ["technician", "reviewer"];
+
+/**
+ * Roles belong to accounts and trial access needs the account's role (trial-access.ts), so an
+ * existing account can only join as its own role. Said to the inviter when inviting...
+ */
+function roleRefusalForInviter(email: string, accountRole: Role, invitedRole: MembershipRole): AppError {
+  const instead = invitableRoles.includes(accountRole) ? `Invite them as a ${accountRole} instead, or use another address.` : "Use another address to invite them.";
+  const message = `${email} already has a ${accountRole} account, and an account keeps one role, so it cannot join this trial as a ${invitedRole}. ${instead}`;
+  return new AppError("CONFLICT", message, [{ path: "role", message }]);
+}
+
+/** ...and to the invited person, should the account have appeared (or changed) since. */
+export function roleRefusalForInvitee(view: Pick<InvitationView, "invitation" | "accountRole" | "inviterName">): AppError | null {
+  const { invitation, accountRole, inviterName } = view;
+  if (!accountRole || accountRole === invitation.role) return null;
+  const instead = invitableRoles.includes(accountRole) ? ` as a ${accountRole}, or at another address` : " at another address";
+  return new AppError(
+    "CONFLICT",
+    `This invitation is for a ${invitation.role}, but ${invitation.email} already has a ${accountRole} account, and an account keeps one role. Ask ${inviterName} to invite you${instead}.`,
+  );
 }
 
 function assertTeamOpen(trial: Trial): void {
@@ -48,43 +75,56 @@ function assertTeamOpen(trial: Trial): void {
 }
 
 export async function createInvitation(inviter: SessionUser, trial: Trial, input: { email: string; role: MembershipRole }): Promise<Invitation> {
-  db();
+  const sequelize = db();
   assertTeamOpen(trial);
   const existing = await User.findOne({ where: { email: input.email } });
   if (existing) {
     if (await Membership.findOne({ where: { trialId: trial.id, userId: existing.id } })) {
       throw new AppError("CONFLICT", `${existing.name} is already on this trial's team.`, [{ path: "email", message: "Already on the team." }]);
     }
-    if (existing.role !== input.role) {
-      const message = `${input.email} already has a ${existing.role} account, so it cannot join as a ${input.role}.`;
-      throw new AppError("CONFLICT", message, [{ path: "role", message }]);
-    }
+    if (existing.role !== input.role) throw roleRefusalForInviter(input.email, existing.role, input.role);
   }
   const pending = await Invitation.findOne({ where: { trialId: trial.id, email: input.email, acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } });
   if (pending) {
     throw new AppError("CONFLICT", `${input.email} already has a pending invitation to this trial; resend it instead.`, [{ path: "email", message: "Already invited." }]);
   }
   const { token, hash } = newLinkToken();
-  const invitation = await Invitation.create({
-    trialId: trial.id,
-    email: input.email,
-    role: input.role,
-    tokenHash: hash,
-    invitedById: inviter.id,
-    expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS),
+  // One transaction: a failed queueing must not leave a pending invitation nobody was sent.
+  const invitation = await sequelize.transaction(async (transaction) => {
+    const created = await Invitation.create(
+      { trialId: trial.id, email: input.email, role: input.role, tokenHash: hash, invitedById: inviter.id, expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS) },
+      { transaction },
+    );
+    await queueInvitationMail(created, token, trial, inviter.name, transaction);
+    return created;
   });
-  await sendInvitationMail(invitation, token, trial, inviter.name);
+  wakeMailWorker();
   return invitation;
 }
 
-/** A fresh link (the old one stops working) and a fresh lifetime. */
+/**
+ * A fresh link (the old one stops working) and a fresh lifetime. The new token and its mail
+ * are stored in one transaction: if the mail cannot be queued, the old link keeps working.
+ */
 export async function resendInvitation(inviter: SessionUser, trial: Trial, invitation: Invitation): Promise<Invitation> {
   assertTeamOpen(trial);
-  const state = invitationState(invitation);
-  if (state === "accepted" || state === "revoked") throw new AppError("CONFLICT", `This invitation was ${state}; invite the person again instead.`);
+  const sequelize = db();
   const { token, hash } = newLinkToken();
-  await invitation.update({ tokenHash: hash, expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS), sentCount: invitation.sentCount + 1 });
-  await sendInvitationMail(invitation, token, trial, inviter.name);
+  try {
+    await sequelize.transaction(async (transaction) => {
+      // Locked so an acceptance in flight either finishes first or sees the new token.
+      await invitation.reload({ transaction, lock: transaction.LOCK.UPDATE });
+      const state = invitationState(invitation);
+      if (state === "accepted" || state === "revoked") throw new AppError("CONFLICT", `This invitation was ${state}; invite the person again instead.`);
+      await invitation.update({ tokenHash: hash, expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS), sentCount: invitation.sentCount + 1 }, { transaction });
+      await queueInvitationMail(invitation, token, trial, inviter.name, transaction);
+    });
+  } catch (error) {
+    // The instance already holds the new values; bring it back to what was kept.
+    await invitation.reload().catch(() => undefined);
+    throw error;
+  }
+  wakeMailWorker();
   return invitation;
 }
 
@@ -100,6 +140,8 @@ export interface InvitationView {
   inviterName: string;
   state: InvitationState;
   accountExists: boolean;
+  /** The role of the account already registered for the invited address, if any. */
+  accountRole: Role | null;
 }
 
 export async function invitationByToken(token: string): Promise<InvitationView | null> {
@@ -109,10 +151,10 @@ export async function invitationByToken(token: string): Promise<InvitationView |
   const [trial, inviter, account] = await Promise.all([
     Trial.findByPk(invitation.trialId),
     User.findByPk(invitation.invitedById, { attributes: ["name"] }),
-    User.findOne({ where: { email: invitation.email }, attributes: ["id"] }),
+    User.findOne({ where: { email: invitation.email }, attributes: ["id", "role"] }),
   ]);
   if (!trial) return null;
-  return { invitation, trial, inviterName: inviter?.name ?? "the researcher", state: invitationState(invitation), accountExists: Boolean(account) };
+  return { invitation, trial, inviterName: inviter?.name ?? "the researcher", state: invitationState(invitation), accountExists: Boolean(account), accountRole: account?.role ?? null };
 }
 
 export interface AcceptOutcome {
@@ -137,6 +179,9 @@ export async function acceptInvitation(
   const { invitation, trial, inviterName } = view;
   if (view.state !== "pending") throw refusalFor(view.state, inviterName);
   assertTeamOpen(trial);
+  // Before asking anyone to sign in: signing in with that account could not help.
+  const roleRefusal = roleRefusalForInvitee(view);
+  if (roleRefusal) throw roleRefusal;
 
   let user: User | null = null;
   if (sessionUser) {
@@ -153,8 +198,9 @@ export async function acceptInvitation(
       ...(!newAccount.password ? [{ path: "password", message: "Choose a password." }] : []),
     ]);
   }
-  if (user && user.role !== invitation.role) {
-    throw new AppError("CONFLICT", `Your account is a ${user.role} account, so it cannot join as a ${invitation.role}. Ask ${inviterName} to invite another address.`);
+  if (user) {
+    const refusal = roleRefusalForInvitee({ invitation, accountRole: user.role, inviterName });
+    if (refusal) throw refusal;
   }
   const passwordHash = user ? null : await hashPassword(newAccount.password!);
 

@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { notificationPreferencesFor } from "@/lib/data/notification-settings";
 import { db } from "@/lib/db/sequelize";
 import { queueMail } from "@/lib/mail/queue";
@@ -23,17 +24,22 @@ export interface NoticeContent {
 
 export type DeliveryOutcome = "queued" | "digest" | "muted";
 
-/** Applies the recipient's settings: muted kinds are dropped, digest readers get it tomorrow. */
-export async function deliverNotice(recipient: Recipient, type: NotificationType, notice: NoticeContent): Promise<DeliveryOutcome> {
-  const preferences = await notificationPreferencesFor(recipient.id);
+/**
+ * Applies the recipient's settings: muted kinds are dropped, digest readers get it tomorrow.
+ * Inside a transaction the worker is not woken: it could not see the row before the commit,
+ * so whoever owns the transaction wakes it afterwards.
+ */
+export async function deliverNotice(recipient: Recipient, type: NotificationType, notice: NoticeContent, options: { transaction?: Transaction } = {}): Promise<DeliveryOutcome> {
+  const { transaction } = options;
+  const preferences = await notificationPreferencesFor(recipient.id, { transaction });
   if (preferences.muted.includes(type)) return "muted";
   if (preferences.delivery === "digest") {
     db();
-    await NotificationDigestItem.create({ userId: recipient.id, type, summary: notice.summary, link: notice.link.url });
+    await NotificationDigestItem.create({ userId: recipient.id, type, summary: notice.summary, link: notice.link.url }, { transaction });
     return "digest";
   }
   const mail = renderMail({ subject: notice.subject, greeting: `Hello ${recipient.name},`, paragraphs: notice.paragraphs, action: notice.link });
-  await queueMail({ kind: `notice:${type}`, to: recipient.email, ...mail });
-  wakeMailWorker();
+  await queueMail({ kind: `notice:${type}`, to: recipient.email, ...mail }, { transaction });
+  if (!transaction) wakeMailWorker();
   return "queued";
 }

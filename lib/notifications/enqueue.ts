@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import { Assessment, Trial, User } from "@/models";
 import { deliverNotice, type DeliveryOutcome, type NoticeContent, type Recipient } from "./deliver";
@@ -6,55 +7,61 @@ import type { NotificationEvent } from "./events";
 import { notices } from "./messages";
 import { activeUsers, followersOf, teamIds } from "./recipients";
 
-async function actorName(actorId: string): Promise<string> {
-  const actor = await User.findByPk(actorId, { attributes: ["name"] });
+type Reading = { transaction?: Transaction };
+
+async function actorName(actorId: string, reading: Reading): Promise<string> {
+  const actor = await User.findByPk(actorId, { attributes: ["name"], ...reading });
   return actor?.name ?? "Someone";
 }
 
 /** Who hears about an event, and what they are told. */
-async function plan(event: NotificationEvent, trial: Trial): Promise<{ recipients: Recipient[]; notice: NoticeContent } | null> {
+async function plan(event: NotificationEvent, trial: Trial, reading: Reading): Promise<{ recipients: Recipient[]; notice: NoticeContent } | null> {
   const base = { trialId: trial.id, trialTitle: trial.title };
   switch (event.type) {
     case "upload-committed": {
-      const assessment = await Assessment.findByPk(event.assessmentId, { attributes: ["name"] });
+      const assessment = await Assessment.findByPk(event.assessmentId, { attributes: ["name"], ...reading });
       return {
-        recipients: await activeUsers([trial.ownerId], event.actorId),
-        notice: notices.uploadCommitted({ ...base, assessmentId: event.assessmentId, assessmentName: assessment?.name ?? "an assessment", versionNumber: event.versionNumber, actorName: await actorName(event.actorId) }),
+        recipients: await activeUsers([trial.ownerId], event.actorId, reading),
+        notice: notices.uploadCommitted({ ...base, assessmentId: event.assessmentId, assessmentName: assessment?.name ?? "an assessment", versionNumber: event.versionNumber, actorName: await actorName(event.actorId, reading) }),
       };
     }
     case "review-requested":
       return {
-        recipients: await activeUsers(await teamIds(trial.id, ["reviewer"]), event.actorId),
-        notice: notices.reviewRequested({ ...base, actorName: await actorName(event.actorId) }),
+        recipients: await activeUsers(await teamIds(trial.id, ["reviewer"], reading), event.actorId, reading),
+        notice: notices.reviewRequested({ ...base, actorName: await actorName(event.actorId, reading) }),
       };
     case "comment-added":
       return {
-        recipients: await activeUsers([trial.ownerId, ...(await teamIds(trial.id, ["reviewer"]))], event.actorId),
-        notice: notices.commentAdded({ ...base, assessmentId: event.assessmentId, actorName: await actorName(event.actorId) }),
+        recipients: await activeUsers([trial.ownerId, ...(await teamIds(trial.id, ["reviewer"], reading))], event.actorId, reading),
+        notice: notices.commentAdded({ ...base, assessmentId: event.assessmentId, actorName: await actorName(event.actorId, reading) }),
       };
     case "trial-approved":
       return {
-        recipients: await activeUsers([trial.ownerId, ...(await teamIds(trial.id, ["technician"]))], event.actorId),
-        notice: notices.trialApproved({ ...base, actorName: await actorName(event.actorId) }),
+        recipients: await activeUsers([trial.ownerId, ...(await teamIds(trial.id, ["technician"], reading))], event.actorId, reading),
+        notice: notices.trialApproved({ ...base, actorName: await actorName(event.actorId, reading) }),
       };
     case "trial-published":
       return {
-        recipients: await activeUsers(await followersOf(trial), event.actorId),
+        recipients: await activeUsers(await followersOf(trial, reading), event.actorId, reading),
         notice: notices.trialPublished({ ...base, crop: trial.crop }),
       };
   }
 }
 
-/** Turns an event into queued mail (or digest entries) for the right people under their settings. */
-export async function enqueueNotifications(event: NotificationEvent): Promise<Map<string, DeliveryOutcome>> {
+/**
+ * Turns an event into queued mail (or digest entries) for the right people under their
+ * settings. Given the action's transaction, everything is read and written through it, so
+ * the notices commit or roll back with the action.
+ */
+export async function enqueueNotifications(event: NotificationEvent, reading: Reading = {}): Promise<Map<string, DeliveryOutcome>> {
   db();
   const outcomes = new Map<string, DeliveryOutcome>();
-  const trial = await Trial.findByPk(event.trialId);
+  const trial = await Trial.findByPk(event.trialId, reading);
   if (!trial) return outcomes;
-  const planned = await plan(event, trial);
+  const planned = await plan(event, trial, reading);
   if (!planned) return outcomes;
   for (const recipient of planned.recipients) {
-    outcomes.set(recipient.email, await deliverNotice(recipient, event.type, planned.notice));
+    outcomes.set(recipient.email, await deliverNotice(recipient, event.type, planned.notice, reading));
   }
   return outcomes;
 }

@@ -20,9 +20,9 @@ export async function requestReview(trial: Trial, userId: string, message: strin
       { trialId: trial.id, userId, entityType: "review", entityId: created.id, action: "create", summary: "Review requested", oldValue: null, newValue: { message }, source: "review", reason: null },
       { transaction },
     );
+    await notify({ type: "review-requested", trialId: trial.id, actorId: userId }, { transaction });
     return created;
   });
-  await notify({ type: "review-requested", trialId: trial.id, actorId: userId });
   return request;
 }
 
@@ -57,9 +57,11 @@ export async function addComment(trial: Trial, userId: string, input: { body: st
     parentId = parent.parentId ?? parent.id;
     assessmentId = parent.assessmentId;
   }
-  const comment = await ReviewComment.create({ trialId: trial.id, assessmentId, parentId, authorId: userId, body: input.body });
-  await notify({ type: "comment-added", trialId: trial.id, assessmentId, commentId: comment.id, actorId: userId });
-  return comment;
+  return db().transaction(async (transaction) => {
+    const comment = await ReviewComment.create({ trialId: trial.id, assessmentId, parentId, authorId: userId, body: input.body }, { transaction });
+    await notify({ type: "comment-added", trialId: trial.id, assessmentId, commentId: comment.id, actorId: userId }, { transaction });
+    return comment;
+  });
 }
 
 export async function setResolved(trial: Trial, userId: string, commentId: string, resolved: boolean): Promise<ReviewComment> {
@@ -84,8 +86,8 @@ export async function approveTrial(trial: Trial, userId: string, note: string): 
       { trialId: trial.id, userId, entityType: "trial", entityId: trial.id, action: "update", summary: "Approved by the reviewer; trial locked", oldValue: { status: "active" }, newValue: { status: "locked", note }, source: "review", reason: null },
       { transaction },
     );
+    await notify({ type: "trial-approved", trialId: trial.id, actorId: userId }, { transaction });
     return open;
   });
-  await notify({ type: "trial-approved", trialId: trial.id, actorId: userId });
   return approved;
 }

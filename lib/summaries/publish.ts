@@ -72,8 +72,9 @@ export async function publishTrial(user: SessionUser, trialId: string, options: 
       },
       { transaction },
     );
+    // Queued with the publication itself: a crash after the commit cannot lose the followers' notice.
+    await notify({ type: "trial-published", trialId, actorId: user.id }, { transaction });
     return now;
   });
-  await notify({ type: "trial-published", trialId, actorId: user.id });
   return { publishedAt };
 }

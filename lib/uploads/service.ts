@@ -243,6 +243,8 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
   recentlyChecked.delete(upload.id);
   // An upload replaces every plot: the values now in place are exactly the file's rows.
   remember(upload.assessmentId, { versionId: version.id, source: result.records });
+  // After the commit rather than inside it: commitVersion owns its transaction and offers no
+  // way in, so a crash in between can lose this notice (never the data).
   await notify({ type: "upload-committed", trialId: upload.trialId, assessmentId: upload.assessmentId, versionNumber: version.number, actorId: user.id });
   return version;
 }
