@@ -17,5 +17,7 @@ declare module "next-auth/jwt" {
     userId: string;
     role: Role;
     name: string;
+    /** Seconds since the epoch at sign-in; the session ends SESSION_MAX_AGE_SECONDS later, however often it is read. */
+    signedInAt: number;
   }
 }

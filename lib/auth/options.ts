@@ -1,17 +1,29 @@
 import type { NextAuthOptions } from "next-auth";
+import { encode } from "next-auth/jwt";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { signInSchema } from "@/lib/validations/auth";
 import { findUserForSignIn } from "@/lib/data/users";
 import { verifyPassword } from "./password";
+import { SESSION_MAX_AGE_SECONDS, sessionSecondsLeft } from "./session-age";
+import { decodeSessionToken } from "./session-token";
 import { assertSignInAllowed, clientAddressOf, recordFailedSignIn } from "./sign-in-throttle";
 
 // A hash of a random password, so an unknown e-mail costs as much time as a wrong password.
 const DUMMY_HASH = "$2b$10$CwTycUXWue0Thq9StjUM0uJ8.pkaSIuiuUe0yzDxdxYZBnNVvyVwe";
 
-export const SESSION_MAX_AGE_SECONDS = 8 * 60 * 60;
+export { SESSION_MAX_AGE_SECONDS };
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_SECONDS },
+  jwt: {
+    // next-auth re-issues the cookie on every session read with a fresh maxAge; the token's
+    // expiry stays where sign-in put it instead, so a session cannot be kept alive forever.
+    async encode(params) {
+      const signedInAt = params.token?.signedInAt ?? Math.floor(Date.now() / 1000);
+      return encode({ ...params, maxAge: sessionSecondsLeft(signedInAt) });
+    },
+    decode: decodeSessionToken,
+  },
   pages: { signIn: "/signin" },
   providers: [
     CredentialsProvider({
@@ -38,6 +50,7 @@ export const authOptions: NextAuthOptions = {
         token.userId = user.id;
         token.role = user.role;
         token.name = user.name;
+        token.signedInAt = Math.floor(Date.now() / 1000);
       }
       return token;
     },

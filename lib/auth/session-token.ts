@@ -1,5 +1,6 @@
 import { decode, type JWT, type JWTDecodeParams } from "next-auth/jwt";
 import { LruCache } from "@/lib/lru-cache";
+import { sessionSecondsLeft } from "./session-age";
 
 /*
  * Decrypting a session cookie (key derivation plus AES-GCM) was a large share of every
@@ -22,5 +23,7 @@ export async function decodeSessionToken({ token, secret }: JWTDecodeParams): Pr
     if (!payload) return null;
     decodedTokens.set(token, payload);
   }
-  return typeof payload.exp === "number" && payload.exp * 1000 > Date.now() ? payload : null;
+  // Both the token's own expiry and the session's absolute end, so no re-issued token outlives it.
+  const now = Date.now();
+  return typeof payload.exp === "number" && payload.exp * 1000 > now && sessionSecondsLeft(payload.signedInAt, now) > 0 ? payload : null;
 }
