@@ -3,7 +3,7 @@ import { AuditEvent, Membership, Trial, User } from "@/models";
 import { createTrialFixture, removeTrialFixtures } from "../factories/trials";
 import { testDatabase } from "../support/database";
 import { signedInAs } from "../support/http";
-import { bringDatabaseBack, takeDatabaseDown } from "../support/services";
+import { bringDatabaseBack, holdTable, takeDatabaseDownUnder } from "../support/services";
 
 afterEach(() => {
   bringDatabaseBack();
@@ -18,8 +18,15 @@ describe("when PostgreSQL goes away during a review approval", () => {
     const reviewerClient = await signedInAs("reviewer@hoebench.test");
     expect((await researcherClient.request(`/api/reviews/${fixture.trial.id}/request`, { method: "POST", json: { message: "Ready for review." } })).status).toBe(201);
 
-    takeDatabaseDown();
-    const refused = await reviewerClient.request(`/api/reviews/${fixture.trial.id}/approve`, { method: "POST", json: { note: "Tables read." } });
+    // The approval gets as far as its audit entry, then loses the database.
+    const hold = await holdTable("audit_events");
+    const answer = reviewerClient.request(`/api/reviews/${fixture.trial.id}/approve`, { method: "POST", json: { note: "Tables read." } });
+    try {
+      takeDatabaseDownUnder(await hold.waiter('INSERT INTO "audit_events"'));
+    } finally {
+      await hold.release();
+    }
+    const refused = await answer;
     expect(refused.status).toBe(503);
     expect((await refused.json()).error.message).toBe("The database is not answering. Nothing was saved; try again in a minute.");
     bringDatabaseBack();

@@ -3,7 +3,8 @@ import { DatasetVersion, Membership, Upload, User } from "@/models";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
 import { signedInAs, type TestClient } from "../support/http";
-import { bringDatabaseBack, startFakesAgain, stopFakes, takeDatabaseDown } from "../support/services";
+import { QueryTypes } from "sequelize";
+import { bringDatabaseBack, holdTable, startFakesAgain, stopFakes, takeDatabaseDownUnder } from "../support/services";
 
 let fixture: TrialFixture;
 let technician: TestClient;
@@ -41,17 +42,30 @@ afterEach(() => {
 });
 
 describe("when PostgreSQL goes away", () => {
-  it("a commit is refused with a clear message, writes nothing, and succeeds once the database is back", async () => {
+  it("in the middle of a commit, the commit is refused with a clear message, writes nothing, and succeeds once the database is back", async () => {
     const uploadId = await sendAndCheck();
     expect((await technician.request(`/api/uploads/${uploadId}/check`, { method: "POST" })).status).toBe(200);
 
-    takeDatabaseDown();
-    const refused = await technician.request(`/api/uploads/${uploadId}/commit`, { method: "POST", json: {} });
+    // The commit gets as far as its audit entry, with the version and its values written, then loses the database.
+    const hold = await holdTable("audit_events");
+    const answer = technician.request(`/api/uploads/${uploadId}/commit`, { method: "POST", json: {} });
+    try {
+      takeDatabaseDownUnder(await hold.waiter('INSERT INTO "audit_events"'));
+    } finally {
+      await hold.release();
+    }
+    const refused = await answer;
     expect(refused.status).toBe(503);
     expect(await refused.json()).toEqual({ error: { code: "UNAVAILABLE", message: "The database is not answering. Nothing was saved; try again in a minute." } });
     bringDatabaseBack();
 
     expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
+    const [{ values }] = await testDatabase().query<{ values: number }>("SELECT count(*)::int AS values FROM observations WHERE assessment_id = :assessmentId", {
+      replacements: { assessmentId: fixture.assessment.id },
+      type: QueryTypes.SELECT,
+    });
+    expect(values).toBe(0);
+    expect((await Upload.findByPk(uploadId))?.status).toBe("checked");
     const committed = await untilOk(() => technician.request(`/api/uploads/${uploadId}/commit`, { method: "POST", json: {} }));
     expect(committed.status).toBe(201);
     expect((await committed.json()).number).toBe(1);

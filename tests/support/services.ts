@@ -48,3 +48,38 @@ export async function startFakesAgain(): Promise<void> {
   for (let attempt = 0; attempt < 100 && !listenerPid(ports.s3); attempt += 1) await new Promise((resolve) => setTimeout(resolve, 100));
   if (!listenerPid(ports.s3)) throw new Error("the fakes did not come back");
 }
+
+/**
+ * Holds a table from a connection of its own, so the next transaction that writes to it waits
+ * there, in the middle of its work: the moment to pull the database away from under it.
+ */
+export async function holdTable(table: string): Promise<{ waiter: (queryStart: string) => Promise<number>; release: () => Promise<void> }> {
+  const { Client } = await import("pg");
+  const holder = new Client({ connectionString: process.env.DATABASE_URL });
+  holder.on("error", () => {});
+  await holder.connect();
+  await holder.query("BEGIN");
+  await holder.query(`LOCK TABLE ${table} IN EXCLUSIVE MODE`);
+  return {
+    /** The backend waiting on the held table with a statement that starts so. */
+    async waiter(queryStart: string): Promise<number> {
+      for (let attempt = 0; attempt < 400; attempt += 1) {
+        const pid = psql(POSTGRES_PORT, `SELECT pid FROM pg_stat_activity WHERE wait_event_type = 'Lock' AND query LIKE '${queryStart.replace(/'/g, "''")}%' LIMIT 1`, databaseFor("test"));
+        if (pid) return Number(pid);
+        await new Promise((resolve) => setTimeout(resolve, 25));
+      }
+      throw new Error(`nothing came to wait on ${table}`);
+    },
+    async release(): Promise<void> {
+      await holder.end().catch(() => {});
+    },
+  };
+}
+
+/** As takeDatabaseDown, but the given backend goes first, before anything could release what it waits for. */
+export function takeDatabaseDownUnder(pid: number): void {
+  const database = databaseFor("test");
+  psql(POSTGRES_PORT, `ALTER DATABASE "${database}" WITH ALLOW_CONNECTIONS false`);
+  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(${Number(pid)})`);
+  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = '${database}' AND pid <> pg_backend_pid()`);
+}
