@@ -1,8 +1,8 @@
 import type { NextConfig } from "next";
-import { contentSecurityPolicy } from "./lib/security/content-security-policy";
+import { securityHeaders } from "./lib/security/headers";
 
 // Read when the app is built: build with the S3_ENDPOINT the browser will upload to.
-const csp = contentSecurityPolicy({ storageEndpoint: process.env.S3_ENDPOINT ?? "http://127.0.0.1:4569", development: process.env.NODE_ENV === "development" });
+const headers = securityHeaders({ storageEndpoint: process.env.S3_ENDPOINT ?? "http://127.0.0.1:4569", development: process.env.NODE_ENV === "development" });
 
 const nextConfig: NextConfig = {
   // Sequelize loads its dialect at run time; bundling it breaks that look-up.
@@ -18,13 +18,7 @@ const nextConfig: NextConfig = {
     return [
       {
         source: "/:path*",
-        headers: [
-          { key: "Content-Security-Policy", value: csp },
-          { key: "X-Content-Type-Options", value: "nosniff" },
-          { key: "X-Frame-Options", value: "DENY" },
-          { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
-          { key: "Permissions-Policy", value: "camera=(self), geolocation=(self), microphone=()" },
-        ],
+        headers,
       },
     ];
   },

@@ -3,6 +3,7 @@ import type { NextRequest } from "next/server";
 import { z } from "zod";
 import { AppError, unexpectedFailure, type ErrorCode, type FieldProblem } from "@/lib/errors";
 import { databaseUnavailable, errorResponse, fromZodError, isDatabaseUnavailable } from "@/lib/http";
+import { readBodyText } from "@/lib/security/request-body";
 import type { Trial } from "@/models";
 import type { Permission } from "./permissions";
 import { currentUser, type SessionUser } from "./session";
@@ -30,7 +31,7 @@ export interface RouteContext<P, Q, B> {
 }
 
 async function readJson(request: NextRequest): Promise<unknown> {
-  const text = await request.text();
+  const text = await readBodyText(request);
   if (text.length === 0) return {};
   try {
     return JSON.parse(text);
@@ -41,7 +42,7 @@ async function readJson(request: NextRequest): Promise<unknown> {
 
 /** A route that takes no body says so rather than ignoring whatever was sent. */
 async function refuseBody<B>(request: NextRequest): Promise<B> {
-  const text = (await request.text()).trim();
+  const text = (await readBodyText(request)).trim();
   if (text !== "" && text !== "{}") throw new AppError("INVALID_INPUT", "This request takes no body.");
   return undefined as B;
 }

@@ -2,6 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { db } from "@/lib/db/sequelize";
 import { AppError, notFound } from "@/lib/errors";
+import { findAssessment } from "@/lib/data/assessments";
 import { findPlotByNumber } from "@/lib/data/plots";
 import { deleteObject, objectSize, presignUpload, readObject } from "@/lib/storage/objects";
 import type { SessionUser } from "@/lib/auth/session";
@@ -23,8 +24,13 @@ export async function photoTrialId(photoId: string): Promise<string> {
 
 export async function startPhoto(user: SessionUser, trial: Trial, input: StartPhotoInput) {
   if (trial.status === "published") throw new AppError("CONFLICT", "This trial is published; photos can no longer be added.");
-  const plot = await findPlotByNumber(trial.id, input.plotNumber);
+  const [plot, assessment] = await Promise.all([
+    findPlotByNumber(trial.id, input.plotNumber),
+    input.assessmentId ? findAssessment(trial.id, input.assessmentId) : null,
+  ]);
   if (!plot) throw new AppError("NOT_FOUND", `Plot ${input.plotNumber} is not in this trial.`);
+  // The id comes from the client: one of another trial's assessments must not be linked here.
+  if (input.assessmentId && !assessment) throw notFound("assessment");
   const id = randomUUID();
   const objectKey = `trials/${trial.id}/photos/${id}`;
   const thumbnailKey = `${objectKey}-thumbnail.jpg`;
