@@ -31,3 +31,22 @@ export async function auditTrailOf(trialId: string, limit = 500): Promise<AuditR
     { replacements: { trialId, limit }, type: QueryTypes.SELECT },
   );
 }
+
+export interface VersionAudit {
+  source: string;
+  afterLock: boolean;
+}
+
+/** The audit event of one data version: the source as recorded (a demo seed, say) and whether it came after the lock. */
+export async function versionAuditOf(trialId: string, assessmentId: string, versionNumber: number): Promise<VersionAudit | null> {
+  const [row] = await db().query<VersionAudit>(
+    `SELECT e.source, e.after_lock AS "afterLock"
+       FROM audit_events e
+      WHERE e.trial_id = :trialId AND e.entity_type = 'assessment-data' AND e.entity_id = :assessmentId
+        AND (e.new_value->>'version')::int = :versionNumber
+      ORDER BY e.id
+      LIMIT 1`,
+    { replacements: { trialId, assessmentId, versionNumber }, type: QueryTypes.SELECT },
+  );
+  return row ?? null;
+}

@@ -62,3 +62,36 @@ export const reviewStatusText: Record<ReviewState["status"] | "none", string> = 
   approved: "Approved by reviewer",
   withdrawn: "Review withdrawn",
 };
+
+export interface ChangeAfterLock {
+  id: string;
+  createdAt: Date;
+  changedBy: string;
+  assessmentId: string;
+  assessmentName: string;
+  versionNumber: number;
+  source: "upload" | "manual" | null;
+  fileName: string | null;
+  summary: string;
+  reason: string | null;
+}
+
+/**
+ * Data versions committed after the trial was locked, newest first, for the reviewer who
+ * signed off on the data as they were. Read from the audit trail, where commitVersion marks
+ * such changes under the assessment's lock.
+ */
+export async function changesAfterLockOf(trialId: string): Promise<ChangeAfterLock[]> {
+  return db().query<ChangeAfterLock>(
+    `SELECT e.id::text AS id, e.created_at AS "createdAt", u.name AS "changedBy", a.id AS "assessmentId", a.name AS "assessmentName",
+            (e.new_value->>'version')::int AS "versionNumber", v.source, up.original_name AS "fileName", e.summary, e.reason
+       FROM audit_events e
+       JOIN users u ON u.id = e.user_id
+       JOIN assessments a ON a.trial_id = e.trial_id AND a.id::text = e.entity_id
+       LEFT JOIN dataset_versions v ON v.assessment_id = a.id AND v.number = (e.new_value->>'version')::int
+       LEFT JOIN uploads up ON up.id = v.upload_id
+      WHERE e.trial_id = :trialId AND e.entity_type = 'assessment-data' AND e.after_lock
+      ORDER BY e.created_at DESC, e.id DESC`,
+    { replacements: { trialId }, type: QueryTypes.SELECT },
+  );
+}

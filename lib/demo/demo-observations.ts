@@ -121,10 +121,27 @@ async function seedTrial(sequelize: Sequelize, transaction: Transaction | undefi
         transaction,
       },
     );
+    // The audit trail has to account for every version, the demo's first one too, in the very
+    // shape commitVersion gives the app's own versions. Not after the lock even in the trial
+    // that starts locked: the story is that its data came in before the sign-off.
+    await sequelize.query(
+      `INSERT INTO audit_events (trial_id, user_id, entity_type, entity_id, action, summary, old_value, new_value, source, reason, after_lock, created_at)
+       VALUES (:trialId, :userId, 'assessment-data', :assessmentId, 'create', :summary, NULL, CAST(:newValue AS jsonb), 'demo seed', NULL, false, now())`,
+      {
+        replacements: {
+          trialId,
+          userId: technicianId,
+          assessmentId: assessment.id,
+          summary: `Version 1: ${rows.length} value${rows.length === 1 ? "" : "s"} for the whole assessment (0 replaced)`,
+          newValue: JSON.stringify({ version: 1, rowsAdded: rows.length, rowsReplaced: 0 }),
+        },
+        transaction,
+      },
+    );
   }
 }
 
-/** Writes version 1 of every assessment of the demo trials that collect data. */
+/** Writes version 1 of every assessment of the demo trials that collect data, each with its audit event. */
 export async function seedDemoObservations(sequelize: Sequelize, transaction?: Transaction): Promise<void> {
   const [technician] = await sequelize.query<{ id: string }>("SELECT id FROM users WHERE email = 'technician@hoebench.test'", { type: QueryTypes.SELECT, transaction });
   if (!technician) return;

@@ -25,6 +25,22 @@ async function plan(event: NotificationEvent, trial: Trial, reading: Reading): P
         notice: notices.uploadCommitted({ ...base, assessmentId: event.assessmentId, assessmentName: assessment?.name ?? "an assessment", versionNumber: event.versionNumber, actorName: await actorName(event.actorId, reading) }),
       };
     }
+    case "data-changed-after-lock": {
+      // The sign-off was given on the data as they were: whoever reviews the trial has to see
+      // what changed since, and why.
+      const assessment = await Assessment.findByPk(event.assessmentId, { attributes: ["name"], ...reading });
+      return {
+        recipients: await activeUsers(await teamIds(trial.id, ["reviewer"], reading), event.actorId, reading),
+        notice: notices.dataChangedAfterLock({
+          ...base,
+          assessmentId: event.assessmentId,
+          assessmentName: assessment?.name ?? "an assessment",
+          versionNumber: event.versionNumber,
+          reason: event.reason,
+          actorName: await actorName(event.actorId, reading),
+        }),
+      };
+    }
     case "review-requested":
       return {
         recipients: await activeUsers(await teamIds(trial.id, ["reviewer"], reading), event.actorId, reading),

@@ -12,6 +12,17 @@ export const notices = {
       link: { label: "See the data", url: absoluteUrl(`/trials/${input.trialId}/data/${input.assessmentId}`) },
     };
   },
+  dataChangedAfterLock(input: { trialId: string; trialTitle: string; assessmentId: string; assessmentName: string; versionNumber: number; reason: string; actorName: string }): NoticeContent {
+    return {
+      subject: `Data changed after lock: ${input.trialTitle}`,
+      summary: `${input.actorName} changed “${input.assessmentName}” in the locked trial ${input.trialTitle} (version ${input.versionNumber}): ${input.reason}`,
+      paragraphs: [
+        `${input.actorName} changed the data for “${input.assessmentName}” in the trial “${input.trialTitle}” after it was approved and locked; the change is version ${input.versionNumber}.`,
+        `Reason given: ${input.reason}`,
+      ],
+      link: { label: "See what changed", url: absoluteUrl(`/trials/${input.trialId}/data/${input.assessmentId}/versions/${input.versionNumber}`) },
+    };
+  },
   reviewRequested(input: { trialId: string; trialTitle: string; actorName: string }): NoticeContent {
     return {
       subject: `Review requested: ${input.trialTitle}`,

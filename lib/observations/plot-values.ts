@@ -1,3 +1,4 @@
+import { perSquareMetreToPerSquareFoot } from "@/lib/stats/measures/per-square-metre-to-per-square-foot";
 import { plotYieldPerArea } from "@/lib/stats/measures/plot-yield-per-area";
 import { quadratDensity } from "@/lib/stats/measures/quadrat-density";
 import type { AssessmentVariable } from "@/models/Assessment";
@@ -29,7 +30,6 @@ export interface PlotValueSettings {
   plotAreaM2: number;
 }
 
-const SQUARE_METRES_PER_SQUARE_FOOT = 0.3048 ** 2;
 const perQuadrat = (unit: string) => /quadrat/i.test(unit);
 
 /**
@@ -57,7 +57,7 @@ export function plotValues(raw: RawValue[], settings: PlotValueSettings): PlotVa
           ...base,
           value: perSquareMetre,
           unit: isCount ? "plants/m²" : "g/m²",
-          customary: isCount ? { value: perSquareMetre * SQUARE_METRES_PER_SQUARE_FOOT, unit: "plants/ft²" } : undefined,
+          customary: isCount ? { value: perSquareMetreToPerSquareFoot(perSquareMetre), unit: "plants/ft²" } : undefined,
         };
       }
       if (settings.variable === "crop-yield" && /^kg/i.test(settings.unit)) {

@@ -14,7 +14,9 @@ import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
 import { notify } from "@/lib/notifications/notify";
 import { assertRecordable } from "@/lib/observations/recordable";
+import { noticeIfAfterLock } from "@/lib/observations/after-lock-notice";
 import { ingestContextFor } from "./context";
+import { safeOriginalName } from "./file-name";
 
 export interface StartedUpload {
   uploadId: string;
@@ -64,7 +66,7 @@ export async function startUpload(user: SessionUser, trial: Trial, input: StartU
     trialId: input.trialId,
     assessmentId: input.assessmentId,
     objectKey,
-    originalName: input.fileName.replace(/[^\w .()-]/g, "_"),
+    originalName: safeOriginalName(input.fileName),
     declaredSizeBytes: input.sizeBytes,
     sizeBytes: null,
     sha256: null,
@@ -246,5 +248,6 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
   // After the commit rather than inside it: commitVersion owns its transaction and offers no
   // way in, so a crash in between can lose this notice (never the data).
   await notify({ type: "upload-committed", trialId: upload.trialId, assessmentId: upload.assessmentId, versionNumber: version.number, actorId: user.id });
+  await noticeIfAfterLock(version, { trialId: upload.trialId, assessmentId: upload.assessmentId, actorId: user.id });
   return version;
 }

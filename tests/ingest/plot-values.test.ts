@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { plotValues, type PlotValueSettings } from "@/lib/observations/plot-values";
+import { perSquareMetreToPerSquareFoot } from "@/lib/stats/measures/per-square-metre-to-per-square-foot";
 
 const base: PlotValueSettings = { variable: "weed-density", unit: "plants per quadrat", quadratAreaM2: 0.25, harvestAreaM2: 4.5, plotAreaM2: 9 };
 
@@ -22,6 +23,8 @@ describe("plot values from raw quadrat values", () => {
     expect(values[0].unit).toBe("plants/m²");
     // 1 ft² = 0.09290304 m² exactly (NIST SP 811): 44 × 0.09290304 = 4.08773376 plants/ft².
     expect(values[0].customary?.value).toBeCloseTo(4.08773376, 12);
+    // The statistics engine's own conversion, not a second copy of the constant.
+    expect(values[0].customary).toEqual({ value: perSquareMetreToPerSquareFoot(44), unit: "plants/ft²" });
   });
 
   it("uses the quadrats present when some were lost", () => {

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { ChangesAfterLock } from "@/components/review/ChangesAfterLock";
 import { CommentThreads, type CommentItem } from "@/components/review/CommentThreads";
 import { ReviewActions } from "@/components/review/ReviewActions";
 import { num, pText } from "@/components/results/format";
@@ -8,7 +9,7 @@ import { TrialTabs } from "@/components/trials/TrialTabs";
 import { assessmentResults, defaultControl, treatmentsOf } from "@/lib/analysis/assessment-results";
 import { can } from "@/lib/auth/permissions";
 import { assessmentsOf } from "@/lib/data/assessments";
-import { commentsOf, reviewStateOf, reviewStatusText, type ReviewCommentView } from "@/lib/data/reviews";
+import { changesAfterLockOf, commentsOf, reviewStateOf, reviewStatusText, type ReviewCommentView } from "@/lib/data/reviews";
 import { trialForPage } from "@/lib/trials/page-access";
 import { analysisOptionsSchema } from "@/lib/validations/analysis";
 
@@ -24,7 +25,13 @@ const asItem = (comment: ReviewCommentView): CommentItem => ({
 export default async function ReviewPage({ params }: { params: Promise<{ trialId: string }> }) {
   const { trialId } = await params;
   const { user, trial } = await trialForPage(trialId, "analysis:read");
-  const [review, comments, assessments, treatments] = await Promise.all([reviewStateOf(trial.id), commentsOf(trial.id), assessmentsOf(trial.id), treatmentsOf(trial.id)]);
+  const [review, comments, assessments, treatments, changesAfterLock] = await Promise.all([
+    reviewStateOf(trial.id),
+    commentsOf(trial.id),
+    assessmentsOf(trial.id),
+    treatmentsOf(trial.id),
+    changesAfterLockOf(trial.id),
+  ]);
   const summaries = await Promise.all(
     assessments.map((assessment) =>
       assessmentResults(trial, assessment.id, analysisOptionsSchema.parse({ control: defaultControl(treatments) })).then(({ results }) => results),
@@ -50,6 +57,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ trialId
         )}
         {trial.status === "locked" && <p className="mt-1 text-sm">The trial is locked: data are read-only, and any later change needs a reason that appears in the audit trail.</p>}
       </div>
+      <ChangesAfterLock trialId={trial.id} changes={changesAfterLock} locked={trial.status === "locked" || trial.status === "published"} />
       <ReviewActions
         trialId={trial.id}
         mayRequest={can(user.role, "review:request") && trial.status === "active" && !open}

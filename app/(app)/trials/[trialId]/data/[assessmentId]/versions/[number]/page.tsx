@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { TrialHeading } from "@/components/trials/TrialHeading";
 import { findAssessment } from "@/lib/data/assessments";
-import { changesIn, versionsOf } from "@/lib/data/observations";
+import { versionAuditOf } from "@/lib/data/audit";
+import { changesIn, versionsOf, type VersionRow } from "@/lib/data/observations";
 import { trialForPage } from "@/lib/trials/page-access";
 import { uuidSchema } from "@/lib/validations/common";
 
@@ -10,6 +11,13 @@ export const metadata: Metadata = { title: "What changed" };
 export const dynamic = "force-dynamic";
 
 const show = (value: number | null) => (value === null ? "—" : String(value));
+
+/** A version row says upload or manual; the audit event also knows versions no person keyed, such as the demo's. */
+function sourceText(version: VersionRow, auditSource: string | undefined): string {
+  if (version.source === "upload") return `Upload of ${version.fileName ?? "a file"}`;
+  if (auditSource === "demo seed") return "Demo seed";
+  return "Per-plot entry";
+}
 
 export default async function VersionChangesPage({ params }: { params: Promise<{ trialId: string; assessmentId: string; number: string }> }) {
   const { trialId, assessmentId, number } = await params;
@@ -19,7 +27,7 @@ export default async function VersionChangesPage({ params }: { params: Promise<{
   if (!assessment) notFound();
   const version = (await versionsOf(assessment.id)).find((entry) => entry.number === Number(number));
   if (!version) notFound();
-  const changes = await changesIn(version.id);
+  const [changes, audit] = await Promise.all([changesIn(version.id), versionAuditOf(trial.id, assessment.id, version.number)]);
   return (
     <section>
       <TrialHeading
@@ -27,7 +35,8 @@ export default async function VersionChangesPage({ params }: { params: Promise<{
         status={trial.status}
         back={{ href: `/trials/${trial.id}/data/${assessment.id}`, label: assessment.name }}
         lines={[
-          `${version.source === "upload" ? `Upload of ${version.fileName}` : "Per-plot entry"} by ${version.createdBy}, ${version.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC`,
+          `${sourceText(version, audit?.source)} by ${version.createdBy}, ${version.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC`,
+          ...(audit?.afterLock ? ["Made after the trial was locked"] : []),
           ...(version.reason ? [`Reason given: ${version.reason}`] : []),
         ]}
       />
