@@ -12,7 +12,13 @@ const POSTGRES_BIN = "/usr/lib/postgresql/15/bin";
 export interface BackupManifest {
   format: "hoebench-backup-1";
   createdAt: string;
-  database: { file: string; sha256: string; rowCounts: Record<string, number> };
+  database: {
+    file: string;
+    sha256: string;
+    rowCounts: Record<string, number>;
+    /** Per table, an MD5 of every row as text in a fixed order, taken in the dump's snapshot; a restore must reproduce each. */
+    rowDigests?: Record<string, string | null>;
+  };
   bucket: string;
   objects: { key: string; file: string; sha256: string; bytes: number }[];
   /** Keys the database names but storage did not have when the backup ran. */
@@ -38,8 +44,23 @@ export async function tableRowCounts(client: pg.Client): Promise<Record<string, 
 }
 
 /**
- * A consistent backup: one exported snapshot serves pg_dump, the row counts and the list of
- * referenced objects, so the files match the database as it was at one instant. Stored
+ * Every row of every table, as text in a fixed order, hashed: two databases with the same
+ * schema and the same digests hold the same data. It reads each table once in full, which a
+ * backup does anyway.
+ */
+export async function tableRowDigests(client: pg.Client): Promise<Record<string, string | null>> {
+  const tables = await client.query<{ name: string }>("SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename");
+  const digests: Record<string, string | null> = {};
+  for (const { name } of tables.rows) {
+    const result = await client.query<{ digest: string | null }>(`SELECT md5(string_agg(t::text, '|' ORDER BY t::text)) AS digest FROM "${name}" t`);
+    digests[name] = result.rows[0].digest;
+  }
+  return digests;
+}
+
+/**
+ * A consistent backup: one exported snapshot serves pg_dump, the row counts and digests, and
+ * the list of referenced objects, so the files match the database as it was at one instant. Stored
  * objects are never rewritten under the same key, so copying them afterwards is safe.
  */
 export async function createBackup(settings: AppConfig, folder: string): Promise<BackupManifest> {
@@ -54,6 +75,7 @@ export async function createBackup(settings: AppConfig, folder: string): Promise
     const dump = spawnSync(path.join(POSTGRES_BIN, "pg_dump"), ["--format=custom", "--no-owner", `--snapshot=${snapshot}`, `--file=${dumpFile}`, settings.DATABASE_URL], { encoding: "utf8" });
     if (dump.status !== 0) throw new Error(`pg_dump failed: ${dump.stderr.trim()}`);
     const rowCounts = await tableRowCounts(client);
+    const rowDigests = await tableRowDigests(client);
     const tables = new Set(Object.keys(rowCounts));
     const keys = (await client.query<{ key: string }>(referencedKeysSql(tables))).rows.map((row) => row.key);
     await client.query("COMMIT");
@@ -74,7 +96,7 @@ export async function createBackup(settings: AppConfig, folder: string): Promise
     const manifest: BackupManifest = {
       format: "hoebench-backup-1",
       createdAt: new Date().toISOString(),
-      database: { file: "database.dump", sha256: sha256Of(readFileSync(dumpFile)), rowCounts },
+      database: { file: "database.dump", sha256: sha256Of(readFileSync(dumpFile)), rowCounts, rowDigests },
       bucket: settings.S3_BUCKET,
       objects,
       missing,

@@ -4,7 +4,7 @@ import path from "node:path";
 import pg from "pg";
 import type { AppConfig } from "@/lib/config";
 import { objectStore } from "./object-store";
-import { objectFilePath, sha256Of, tableRowCounts, type BackupManifest } from "./backup";
+import { objectFilePath, sha256Of, tableRowCounts, tableRowDigests, type BackupManifest } from "./backup";
 
 const POSTGRES_BIN = "/usr/lib/postgresql/15/bin";
 
@@ -41,6 +41,12 @@ export async function restoreBackup(settings: AppConfig, folder: string): Promis
     const counts = await tableRowCounts(client);
     for (const [table, count] of Object.entries(manifest.database.rowCounts)) {
       if (counts[table] !== count) throw new Error(`table ${table} has ${counts[table]} rows after restore, the backup had ${count}`);
+    }
+    if (manifest.database.rowDigests) {
+      const digests = await tableRowDigests(client);
+      for (const [table, digest] of Object.entries(manifest.database.rowDigests)) {
+        if (digests[table] !== digest) throw new Error(`table ${table} does not hold the same rows after restore as in the backup`);
+      }
     }
     return { tables: Object.keys(counts).length, objects: files.length };
   } finally {

@@ -70,7 +70,13 @@ describe("backup and restore", () => {
     const restoreOutput = run("scripts/restore.ts", [folder], { DATABASE_URL: restoreUrl, S3_BUCKET: restoreBucket });
     expect(restoreOutput).toContain(`restored`);
 
-    expect(await tableDigests(restoreUrl)).toEqual(await tableDigests(testEnvironment().databaseUrl));
+    // Against the database as the backup saw it (its snapshot), not as it is now: the app's own
+    // background work (the mail queue) may have moved on since.
+    const snapshot = Object.fromEntries(
+      Object.entries(manifest.database.rowCounts as Record<string, number>).map(([table, count]) => [table, `${count}:${manifest.database.rowDigests[table]}`]),
+    );
+    expect(Object.keys(snapshot).length).toBeGreaterThan(20);
+    expect(await tableDigests(restoreUrl)).toEqual(snapshot);
     const store = objectStore(settings);
     for (const object of manifest.objects as { key: string; sha256: string }[]) {
       const original = await store.get(settings.S3_BUCKET, object.key);
