@@ -1,17 +1,16 @@
 import { z } from "zod";
 
+const DEVELOPMENT_SECRET = "hoebench-local-development-secret";
+
 /**
  * Every setting the app reads from its environment, validated once. Defaults match the
  * services `npm start` runs on loopback; production sets them all explicitly.
  */
-const DEVELOPMENT_SECRET = "hoebench-local-development-secret";
-const DEVELOPMENT_BASE_URL = "http://127.0.0.1:3000";
-
 const configSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   DATABASE_URL: z.url().default("postgres://postgres@127.0.0.1:54329/hoebench"),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
-  APP_BASE_URL: z.url().default(DEVELOPMENT_BASE_URL),
+  APP_BASE_URL: z.url().default("http://127.0.0.1:3000"),
   NEXTAUTH_SECRET: z.string().min(16).default(DEVELOPMENT_SECRET),
   S3_ENDPOINT: z.url().default("http://127.0.0.1:4569"),
   S3_REGION: z.string().min(1).default("us-east-1"),
@@ -35,13 +34,16 @@ const configSchema = z.object({
    * (scripts/client-address.cjs); rate limits per address depend on it.
    */
   TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
-}).superRefine((settings, context) => {
-  // A development default would let anyone who reads this file sign session cookies.
-  if (settings.NODE_ENV !== "production") return;
-  for (const [name, fallback] of [["NEXTAUTH_SECRET", DEVELOPMENT_SECRET], ["APP_BASE_URL", DEVELOPMENT_BASE_URL]] as const) {
-    if (settings[name] === fallback) context.addIssue({ code: "custom", path: [name], message: "must be set in production" });
-  }
 });
+
+/** Settings production must give itself: the development fallbacks would let anyone sign session cookies, and mail links would point at loopback. */
+function productionProblems(env: Record<string, string | undefined>): string[] {
+  if (env.NODE_ENV !== "production") return [];
+  const problems: string[] = [];
+  if (!env.NEXTAUTH_SECRET || env.NEXTAUTH_SECRET === DEVELOPMENT_SECRET) problems.push("NEXTAUTH_SECRET: must be set in production");
+  if (!env.APP_BASE_URL) problems.push("APP_BASE_URL: must be set in production");
+  return problems;
+}
 
 export type AppConfig = z.infer<typeof configSchema>;
 
@@ -49,10 +51,8 @@ let cached: AppConfig | undefined;
 
 function readConfig(env: Record<string, string | undefined>): AppConfig {
   const parsed = configSchema.safeParse(env);
-  if (!parsed.success) {
-    const problems = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`).join("; ");
-    throw new Error(`invalid configuration: ${problems}`);
-  }
+  const problems = [...(parsed.success ? [] : parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`)), ...productionProblems(env)];
+  if (problems.length > 0 || !parsed.success) throw new Error(`invalid configuration: ${problems.join("; ")}`);
   return parsed.data;
 }
 

@@ -16,8 +16,13 @@ describe("configuration", () => {
 
   it("refuses to run in production on the development secret or base address", () => {
     expect(() => parseConfig({ NODE_ENV: "production" })).toThrow(/NEXTAUTH_SECRET[\s\S]*must be set in production[\s\S]*APP_BASE_URL/);
+    expect(() => parseConfig({ NODE_ENV: "production", NEXTAUTH_SECRET: "hoebench-local-development-secret", APP_BASE_URL: "http://127.0.0.1:3000" })).toThrow(
+      "invalid configuration: NEXTAUTH_SECRET: must be set in production",
+    );
     const settings = parseConfig({ NODE_ENV: "production", NEXTAUTH_SECRET: "a".repeat(32), APP_BASE_URL: "https://trials.example.org" });
     expect(settings.TRUSTED_PROXY_HOPS).toBe(0);
+    // npm start serves a production build on loopback, naming its address.
+    expect(parseConfig({ NODE_ENV: "production", NEXTAUTH_SECRET: "b".repeat(32), APP_BASE_URL: "http://127.0.0.1:3000" }).APP_BASE_URL).toBe("http://127.0.0.1:3000");
     expect(() => parseConfig({ TRUSTED_PROXY_HOPS: "-1" })).toThrow(/TRUSTED_PROXY_HOPS/);
   });
 });
