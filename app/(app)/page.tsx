@@ -56,7 +56,7 @@ export default async function HomePage() {
           items={trials.filter((trial) => trial.status !== "draft").map((trial) => ({ id: trial.id, title: trial.title, status: reviewStatus.get(trial.id) ?? "none" }))}
         />
       )}
-      <TrialList trials={trials} empty={heading.empty} />
+      <TrialList trials={trials} empty={heading.empty} linkTo={user.role === "grower" ? "library" : "trial"} />
     </section>
   );
 }

@@ -4,8 +4,8 @@ import { StatusBadge } from "./StatusBadge";
 
 const designNames = { rcbd: "Randomized complete block", crd: "Completely randomized", latin: "Latin square" } as const;
 
-/** `linked` makes each title open the trial page; growers' published list has no such page yet. */
-export function TrialList({ trials, empty, linked = false }: { trials: TrialSummary[]; empty: string; linked?: boolean }) {
+/** Each title opens the trial's page, or for growers (who see published trials only) its library entry. */
+export function TrialList({ trials, empty, linkTo = "trial" }: { trials: TrialSummary[]; empty: string; linkTo?: "trial" | "library" }) {
   if (trials.length === 0) return <p className="rounded border border-dashed border-soil-200 bg-white p-6 text-soil-700">{empty}</p>;
   return (
     <ul className="divide-y divide-soil-100 rounded border border-soil-200 bg-white">
@@ -13,13 +13,9 @@ export function TrialList({ trials, empty, linked = false }: { trials: TrialSumm
         <li key={trial.id} className="flex flex-col gap-1 p-4 sm:flex-row sm:items-center sm:gap-4" data-testid="trial-row">
           <div className="flex-1">
             <p className="font-medium">
-              {linked ? (
-                <Link href={`/trials/${trial.id}`} className="text-leaf-700 underline-offset-2 hover:underline">
-                  {trial.title}
-                </Link>
-              ) : (
-                trial.title
-              )}
+              <Link href={linkTo === "library" ? `/library/${trial.id}` : `/trials/${trial.id}`} className="text-leaf-700 underline-offset-2 hover:underline">
+                {trial.title}
+              </Link>
             </p>
             <p className="text-sm text-soil-700">
               {trial.crop} · {trial.season} · {trial.siteName}, {trial.region}

@@ -99,6 +99,16 @@ export async function seedDemo(sequelize: Sequelize): Promise<"seeded" | "alread
       await Membership.create({ trialId: trials.get(demo.trial)!.id, userId: users.get(demo.user)!.id, role: demo.role }, { transaction });
     }
     await seedDemoObservations(sequelize, transaction);
+    // A published trial was signed off by its reviewer first: the review history says so.
+    for (const demo of demoTrials.filter((candidate) => candidate.status === "published")) {
+      const reviewer = demoMemberships.find((membership) => membership.trial === demo.key && membership.role === "reviewer");
+      if (!reviewer) continue;
+      await sequelize.query(
+        `INSERT INTO review_requests (id, trial_id, status, requested_by_id, message, decided_by_id, decided_at, decision_note, created_at, updated_at)
+         VALUES (gen_random_uuid(), :trialId, 'approved', :ownerId, 'All assessments are in; ready for review.', :reviewerId, now(), 'Tables and assumption checks read; approved for publication.', now(), now())`,
+        { replacements: { trialId: trials.get(demo.key)!.id, ownerId: users.get(demo.owner)!.id, reviewerId: users.get(reviewer.user)!.id }, transaction },
+      );
+    }
     toPublish.push(...demoTrials.filter((demo) => demo.status === "published").map((demo) => trials.get(demo.key)!.id));
   });
   await publishDemoTrials(sequelize, toPublish);

@@ -39,7 +39,7 @@ export default async function TrialsPage({ searchParams }: { searchParams: Promi
         {trials.length} {trials.length === 1 ? "trial" : "trials"}
         {filtered ? " match the filters" : ""}
       </p>
-      <TrialList linked trials={trials} empty={filtered ? "No trials match these filters." : "No trials yet."} />
+      <TrialList trials={trials} empty={filtered ? "No trials match these filters." : "No trials yet."} />
     </section>
   );
 }
