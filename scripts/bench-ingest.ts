@@ -119,8 +119,8 @@ async function main(): Promise<void> {
   stopChildren();
   const seconds = median(pathSeconds);
   const copy = median(copySeconds);
-  process.stdout.write(`${JSON.stringify({ rows, seconds: Number(seconds.toFixed(3)), rowsPerSecond: Math.round(rows / seconds), copySeconds: Number(copy.toFixed(3)), ratio: Number((seconds / copy).toFixed(2)) })}\n`);
-  shutdown(0);
+  // Last, after whatever clean-up prints.
+  shutdown(0, JSON.stringify({ rows, seconds: Number(seconds.toFixed(3)), rowsPerSecond: Math.round(rows / seconds), copySeconds: Number(copy.toFixed(3)), ratio: Number((seconds / copy).toFixed(2)) }));
 }
 
 main().catch((error: Error) => {

@@ -190,8 +190,8 @@ async function main(): Promise<void> {
       return [name, { p50Ms: percentile(sorted, 50), p95Ms: percentile(sorted, 95), p99Ms: percentile(sorted, 99), requests: list.length }];
     }),
   );
-  process.stdout.write(`${JSON.stringify({ requestsPerSecond: Math.round((requests / elapsed) * 10) / 10, errors, non2xx, clients: CLIENTS, seconds: SECONDS, thinkTimeMs: THINK_MS, routes })}\n`);
-  shutdown(0);
+  // Last, after whatever clean-up prints.
+  shutdown(0, JSON.stringify({ requestsPerSecond: Math.round((requests / elapsed) * 10) / 10, errors, non2xx, clients: CLIENTS, seconds: SECONDS, thinkTimeMs: THINK_MS, routes }));
 }
 
 main().catch((error: Error) => {

@@ -1,3 +1,7 @@
+/**
+ * Progress of the start, test and benchmark scripts. On stderr: stdout is kept for what a
+ * command answers with (the test summary line, a benchmark's JSON), which must come last.
+ */
 export function say(message: string): void {
-  process.stdout.write(`[hoebench] ${message}\n`);
+  process.stderr.write(`[hoebench] ${message}\n`);
 }

@@ -8,7 +8,8 @@ let stopping = false;
 
 /** A critical child's exit ends the run; a test run's fakes may be stopped and restarted by fault tests. */
 export function startChild(name: string, command: string, args: string[], env: Record<string, string>, cwd: string, critical = true): ChildProcess {
-  const child = spawn(command, args, { cwd, env: { ...process.env, ...env }, stdio: ["ignore", "inherit", "inherit"], detached: true });
+  // Children write to stderr: stdout carries only what the command answers with (a summary, a JSON line).
+  const child = spawn(command, args, { cwd, env: { ...process.env, ...env }, stdio: ["ignore", 2, 2], detached: true });
   children.push(child);
   child.on("exit", (code, signal) => {
     if (!stopping && critical) {
