@@ -1,8 +1,10 @@
 import type { NextConfig } from "next";
+import { contentSecurityPolicy } from "./lib/security/content-security-policy";
 import { securityHeaders } from "./lib/security/headers";
 
-// Read when the app is built: build with the S3_ENDPOINT the browser will upload to.
-const headers = securityHeaders({ storageEndpoint: process.env.S3_ENDPOINT ?? "http://127.0.0.1:4569", development: process.env.NODE_ENV === "development" });
+// Answers that are not pages (the API) carry a policy under which no script runs; pages get
+// theirs, with a nonce, from proxy.ts. Read when the app is built.
+const nonPagePolicy = contentSecurityPolicy({ storageEndpoint: process.env.S3_ENDPOINT ?? "http://127.0.0.1:4569", development: process.env.NODE_ENV === "development" });
 
 const nextConfig: NextConfig = {
   // Sequelize loads its dialect at run time; bundling it breaks that look-up.
@@ -16,10 +18,8 @@ const nextConfig: NextConfig = {
   typedRoutes: false,
   async headers() {
     return [
-      {
-        source: "/:path*",
-        headers,
-      },
+      { source: "/:path*", headers: securityHeaders() },
+      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: nonPagePolicy }] },
     ];
   },
 };

@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import "./globals.css";
 
 const inter = localFont({
@@ -16,7 +17,9 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Rendered per request, never ahead of time: each page's scripts carry that request's nonce (proxy.ts).
+  await connection();
   return (
     <html lang="en" className={inter.variable}>
       <body className="min-h-screen font-sans">{children}</body>
