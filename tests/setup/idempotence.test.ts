@@ -1,4 +1,4 @@
-import { execFileSync, spawnSync } from "node:child_process";
+import { spawnSync } from "node:child_process";
 import { readdirSync } from "node:fs";
 import path from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
@@ -10,11 +10,11 @@ import { testEnvironment } from "../support/environment";
 
 const database = "hoebench_idempotence";
 
+/** What the set-up says about itself (its progress goes to stderr). */
 function runSetup(): string {
-  return execFileSync(path.join(projectRoot, "node_modules/.bin/tsx"), ["scripts/run.ts", "setup", "--database", database], {
-    cwd: projectRoot,
-    encoding: "utf8",
-  });
+  const result = spawnSync(path.join(projectRoot, "node_modules/.bin/tsx"), ["scripts/run.ts", "setup", "--database", database], { cwd: projectRoot, encoding: "utf8" });
+  if (result.status !== 0) throw new Error(`set-up failed: ${result.stderr}`);
+  return `${result.stdout}${result.stderr}`;
 }
 
 function postmastersOnOurPort(): number {
