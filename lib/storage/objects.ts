@@ -41,6 +41,18 @@ export async function objectInfo(key: string): Promise<{ size: number; etag: str
   }
 }
 
+/** The object's size, entity tag and bytes in one request; null when there is no such object. */
+export async function openObject(key: string): Promise<{ size: number; etag: string; body: AsyncIterable<Uint8Array> & { destroy?: () => void } } | null> {
+  try {
+    const response = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+    return { size: response.ContentLength ?? 0, etag: response.ETag ?? "", body: response.Body as AsyncIterable<Uint8Array> & { destroy?: () => void } };
+  } catch (error) {
+    const status = (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+    if (status === 404 || (error as Error).name === "NoSuchKey" || (error as Error).name === "NotFound") return null;
+    throw unavailable();
+  }
+}
+
 export async function readObject(key: string): Promise<AsyncIterable<Uint8Array>> {
   try {
     const response = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));

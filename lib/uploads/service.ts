@@ -7,7 +7,7 @@ import { readCsv } from "@/lib/ingest/read-csv";
 import type { IngestProblem, IngestRecord } from "@/lib/ingest/types";
 import { commitVersion, type CommittedVersion } from "@/lib/observations/commit-version";
 import { currentRawValues } from "@/lib/data/observations";
-import { objectInfo, presignUpload, readObject } from "@/lib/storage/objects";
+import { objectInfo, openObject, presignUpload } from "@/lib/storage/objects";
 import type { ReadCsvResult } from "@/lib/ingest/read-csv";
 import type { SessionUser } from "@/lib/auth/session";
 import type { StartUploadInput } from "@/lib/validations/uploads";
@@ -96,15 +96,25 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   // Storage and the database are asked at once.
   const contextRead = ingestContextFor(upload.trialId, upload.assessmentId);
   contextRead.catch(() => {});
-  const info = await objectInfo(upload.objectKey);
-  if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
-  if (info.size !== Number(upload.declaredSizeBytes)) throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
-  const context = await contextRead;
   const cached = recentlyChecked.get(upload.id);
-  if (cached && info.etag && cached.etag === info.etag && cached.plotCount === context.plots.length) return cached.result;
-  const result = await readCsv(await readObject(upload.objectKey), context);
+  if (cached) {
+    // The parse is reused only for the very same stored object (entity tag) and plots.
+    const info = await objectInfo(upload.objectKey);
+    if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
+    const context = await contextRead;
+    if (info.etag && cached.etag === info.etag && cached.plotCount === context.plots.length) return cached.result;
+  }
+  // One request gives the size, the entity tag and the bytes.
+  const stored = await openObject(upload.objectKey);
+  if (stored === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
+  if (stored.size !== Number(upload.declaredSizeBytes)) {
+    stored.body.destroy?.();
+    throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
+  }
+  const context = await contextRead;
+  const result = await readCsv(stored.body, context);
   recentlyChecked.delete(upload.id);
-  recentlyChecked.set(upload.id, { etag: info.etag, plotCount: context.plots.length, result });
+  recentlyChecked.set(upload.id, { etag: stored.etag, plotCount: context.plots.length, result });
   while (recentlyChecked.size > RECENT_LIMIT) recentlyChecked.delete(recentlyChecked.keys().next().value!);
   return result;
 }
