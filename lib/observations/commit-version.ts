@@ -1,10 +1,11 @@
 import "server-only";
+import { randomUUID } from "node:crypto";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type pg from "pg";
 import { AuditEvent, DatasetVersion } from "@/models";
 import type { VersionSource } from "@/models/DatasetVersion";
-import { copyValues } from "./copy-values";
+import { copyValues, encodeValues } from "./copy-values";
 import { groupValuesByPlot } from "./group-values";
 
 export interface NewValue {
@@ -79,8 +80,11 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       "SELECT COALESCE(MAX(number), 0) + 1 AS next FROM dataset_versions WHERE assessment_id = :assessmentId",
       { replacements: { assessmentId: request.assessmentId }, type: QueryTypes.SELECT, transaction },
     );
+    // Named here, so the values can be encoded for their COPY while the version is inserted.
+    const versionId = randomUUID();
     const creating = DatasetVersion.create(
       {
+        id: versionId,
         assessmentId: request.assessmentId,
         trialId: request.trialId,
         number: next,
@@ -94,11 +98,12 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       },
       { transaction },
     );
-    // Checked while the database writes the version and its sets (a refusal rolls both back):
+    // Checked and encoded while the database writes the version and its sets (a refusal rolls both back):
     // one turn of the event loop puts the insert on the wire before this thread gets busy.
     creating.catch(() => {});
     await new Promise((resolve) => setImmediate(resolve));
     const grouped = groupValuesByPlot(request.values, plots.map((plot) => plot.number));
+    const payload = grouped.length > 0 ? encodeValues(grouped, versionId, plotIds) : null;
     const version = await creating;
 
     // The version's insert trigger has closed the earlier sets of the plots it covers.
@@ -108,7 +113,7 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
         WHERE s.replaced_in_version_id = :versionId`,
       { replacements: { versionId: version.id }, type: QueryTypes.SELECT, transaction },
     );
-    if (grouped.length > 0) await copyValues(clientOf(transaction), grouped, version.id, plotIds);
+    if (payload) await copyValues(clientOf(transaction), payload);
     if (request.uploadId) {
       // Inside the same transaction, so a file can never become two versions.
       const [, marked] = (await sequelize.query(

@@ -80,10 +80,15 @@ function* binaryRows(plots: readonly PlotValues[], versionId: string, plotIds: M
 }
 
 /**
- * Streams a version's values into observation_values, one row per plot, on the client that
- * holds its transaction. Binary, so PostgreSQL parses no text.
+ * A version's values as one binary COPY payload for observation_values, a row per plot.
+ * Encoded ahead of the COPY, while the database is still busy with the version's own row.
  */
-export async function copyValues(client: pg.ClientBase, plots: readonly PlotValues[], versionId: string, plotIds: Map<number, string>): Promise<void> {
+export function encodeValues(plots: readonly PlotValues[], versionId: string, plotIds: Map<number, string>): Buffer {
+  return Buffer.concat([...binaryRows(plots, versionId, plotIds)]);
+}
+
+/** Sends an encoded payload with COPY on the client that holds the version's transaction. Binary, so PostgreSQL parses no text. */
+export async function copyValues(client: pg.ClientBase, payload: Buffer): Promise<void> {
   const target = client.query(copyFrom('COPY observation_values (version_id, plot_id, quadrats, species, "values") FROM STDIN (FORMAT binary)'));
-  await pipeline(Readable.from(binaryRows(plots, versionId, plotIds), { objectMode: false }), target);
+  await pipeline(Readable.from([payload], { objectMode: false }), target);
 }
