@@ -31,6 +31,11 @@ function asPostgresUser(command: string, args: string[]): string {
  * initdb and postgres refuse to run as root, and the postgres user cannot enter a folder
  * below a mode-700 home; then the cluster lives in /var/lib/hoebench, keyed by project path.
  */
+/**
+ * The cluster lives in the project's own git-ignored .hoebench/, unless the postgres user
+ * cannot reach that folder (a checkout under a home directory closed to others, as /root is):
+ * then in a folder of its own under /var/lib/hoebench, named after the checkout's path.
+ */
 function chooseClusterRoot(projectRoot: string): string {
   const local = path.join(projectRoot, ".hoebench");
   mkdirSync(local, { recursive: true });
@@ -101,6 +106,10 @@ export function ensureCluster(options: ClusterOptions): Cluster {
 
   if (isReady(options.port)) {
     say(`PostgreSQL already running on 127.0.0.1:${options.port}`);
+    // A test run starts the cluster without durable writes; data kept by npm start deserve them.
+    if (!options.fastUnsafe && psql(options.port, "SHOW fsync").trim() === "off") {
+      say("warning: this PostgreSQL was started by a test run, without durable writes (fsync off); stop it (or let the tests finish) and start again to keep your data safe");
+    }
     return { dataDir, socketDir, port: options.port, startedHere: false, stop: () => {} };
   }
 
