@@ -31,6 +31,8 @@ test("a technician uploads a sheet, fixes a bad row, re-uploads, enters a plot b
   const trialId = await openLettuceTrial(page);
   await page.getByRole("link", { name: "Field data" }).click();
   await page.getByRole("link", { name: /^Weed density/ }).first().click();
+  await expect(page).toHaveURL(/\/data\/[0-9a-f-]{36}$/);
+  const assessmentPath = new URL(page.url()).pathname;
   const quadrats = Number((await page.getByText(/quadrats? per plot/).first().textContent())!.match(/(\d+) quadrats? per plot/)![1]);
 
   // A slow line, so the progress bar is there to see.
@@ -91,5 +93,13 @@ test("a technician uploads a sheet, fixes a bad row, re-uploads, enters a plot b
   await expect(trail).toContainText("for plot 101");
   await expect(trail).toContainText("for the whole assessment");
   await researcher.screenshot({ path: "test-results/audit-trail.png", fullPage: true });
+
+  // The values themselves and their versions, as the researcher reads them.
+  await researcher.goto(assessmentPath);
+  await expect(researcher.getByTestId("versions")).toContainText("Upload of density-fixed.csv by Tomas Brindlewood");
+  await expect(researcher.getByRole("heading", { name: "Plot values now" })).toBeVisible();
+  await expect(researcher.getByRole("cell", { name: "203", exact: true }).first()).toBeVisible();
+  await researcher.goto(`/trials/${trialId}/plots/101`);
+  await expect(researcher.getByLabel(/^Quadrat 1$|^Value$/)).toHaveValue("17");
   await researcher.close();
 });
