@@ -1,23 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { DEMO_PASSWORD } from "@/lib/demo/scenario";
-import { testEnvironment } from "../support/environment";
+import { signInSetCookie } from "../support/http";
 
 const EIGHT_HOURS_MS = 8 * 60 * 60 * 1000;
-const url = (path: string) => new URL(path, testEnvironment().baseUrl);
-
-/** The raw Set-Cookie of the session, as a browser receives it at sign-in. */
-async function sessionSetCookie(email: string): Promise<string | undefined> {
-  const csrf = await fetch(url("/api/auth/csrf"));
-  const csrfCookie = csrf.headers.getSetCookie().map((cookie) => cookie.split(";")[0]).join("; ");
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const answer = await fetch(url("/api/auth/callback/credentials"), {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie },
-    body: new URLSearchParams({ csrfToken, email, password: DEMO_PASSWORD, json: "true" }).toString(),
-  });
-  return answer.headers.getSetCookie().find((cookie) => /^(__Secure-)?next-auth\.session-token=/.test(cookie));
-}
 
 function attributesOf(setCookie: string): Map<string, string> {
   const [, ...parts] = setCookie.split(";");
@@ -32,7 +16,7 @@ function attributesOf(setCookie: string): Map<string, string> {
 describe("the session cookie set at sign-in", () => {
   it("is HttpOnly, SameSite=Lax, for the whole site, and lasts at most 8 hours", async () => {
     const before = Date.now();
-    const setCookie = await sessionSetCookie("technician@hoebench.test");
+    const setCookie = await signInSetCookie("technician@hoebench.test");
     expect(setCookie, "sign-in sets a session cookie").toBeDefined();
     const attributes = attributesOf(setCookie!);
     expect(attributes.has("httponly")).toBe(true);

@@ -1,10 +1,10 @@
 import { decode, encode } from "next-auth/jwt";
 import { describe, expect, it } from "vitest";
 import { SESSION_MAX_AGE_SECONDS, sessionSecondsLeft } from "@/lib/auth/session-age";
-import { DEMO_PASSWORD } from "@/lib/demo/scenario";
 import { User } from "@/models";
 import { testDatabase } from "../support/database";
 import { testEnvironment } from "../support/environment";
+import { signInSetCookie } from "../support/http";
 
 const COOKIE = "next-auth.session-token";
 const secret = () => process.env.NEXTAUTH_SECRET!;
@@ -16,18 +16,9 @@ function sessionCookieIn(response: Response): string | null {
 }
 
 async function signIn(email: string): Promise<string> {
-  const csrf = await fetch(url("/api/auth/csrf"));
-  const csrfCookie = csrf.headers.getSetCookie().map((cookie) => cookie.split(";")[0]).join("; ");
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const answer = await fetch(url("/api/auth/callback/credentials"), {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie },
-    body: new URLSearchParams({ csrfToken, email, password: DEMO_PASSWORD, json: "true" }).toString(),
-  });
-  const token = sessionCookieIn(answer);
-  if (!token) throw new Error(`could not sign in as ${email}`);
-  return token;
+  const setCookie = await signInSetCookie(email);
+  if (!setCookie) throw new Error(`could not sign in as ${email}`);
+  return setCookie.slice(COOKIE.length + 1).split(";")[0];
 }
 
 const withToken = (token: string) => ({ headers: { cookie: `${COOKIE}=${token}` }, redirect: "manual" as const });

@@ -59,3 +59,18 @@ export async function signedInAs(email: string): Promise<TestClient> {
   if (!(await client.signIn(email))) throw new Error(`could not sign in as ${email}`);
   return client;
 }
+
+/** Signs in with a bare form post, as a browser does, and returns the session cookie's raw Set-Cookie header. */
+export async function signInSetCookie(email: string, password = DEMO_PASSWORD): Promise<string | undefined> {
+  const url = (path: string) => new URL(path, testEnvironment().baseUrl);
+  const csrf = await fetch(url("/api/auth/csrf"));
+  const csrfCookie = csrf.headers.getSetCookie().map((cookie) => cookie.split(";")[0]).join("; ");
+  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+  const answer = await fetch(url("/api/auth/callback/credentials"), {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }).toString(),
+  });
+  return answer.headers.getSetCookie().find((cookie) => /^(__Secure-)?next-auth\.session-token=/.test(cookie));
+}
