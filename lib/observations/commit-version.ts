@@ -4,6 +4,7 @@ import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type pg from "pg";
 import { AuditEvent, DatasetVersion } from "@/models";
+import { notify } from "@/lib/notifications/notify";
 import type { VersionSource } from "@/models/DatasetVersion";
 import { copyValues, encodeValues } from "./copy-values";
 import { groupValuesByPlot } from "./group-values";
@@ -143,6 +144,11 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       },
       { transaction },
     );
+    // Queued with the data, so a crash after the commit cannot lose them: the owner hears of a
+    // new upload, and the reviewers of any change made after their sign-off, with its reason.
+    const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
+    if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
+    if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
     return { id: version.id, number: next, rowsAdded: request.values.length, rowsReplaced };
   });
 }

@@ -3,7 +3,6 @@ import { db } from "@/lib/db/sequelize";
 import { AppError } from "@/lib/errors";
 import { findAssessment } from "@/lib/data/assessments";
 import { findPlotByNumber } from "@/lib/data/plots";
-import { noticeIfAfterLock } from "./after-lock-notice";
 import { assertRecordable } from "./recordable";
 import type { SessionUser } from "@/lib/auth/session";
 import type { PlotEntryInput } from "@/lib/validations/observations";
@@ -26,7 +25,7 @@ export async function savePlotEntry(user: SessionUser, trial: Trial, input: Plot
     if (keys.has(key)) throw new AppError("INVALID_INPUT", `Quadrat ${entry.quadrat}${entry.species ? ` (${entry.species})` : ""} is entered twice.`);
     keys.add(key);
   }
-  const version = await commitVersion(db(), {
+  return commitVersion(db(), {
     trialId: trial.id,
     assessmentId: assessment.id,
     userId: user.id,
@@ -35,6 +34,4 @@ export async function savePlotEntry(user: SessionUser, trial: Trial, input: Plot
     values: input.values.filter((entry) => entry.value !== null).map((entry) => ({ plotNumber: plot.number, quadrat: entry.quadrat, species: entry.species, value: entry.value! })),
     reason: input.reason,
   });
-  await noticeIfAfterLock(version, { trialId: trial.id, assessmentId: assessment.id, actorId: user.id });
-  return version;
 }

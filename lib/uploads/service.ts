@@ -12,9 +12,7 @@ import type { ReadCsvResult } from "@/lib/ingest/read-csv";
 import type { SessionUser } from "@/lib/auth/session";
 import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
-import { notify } from "@/lib/notifications/notify";
 import { assertRecordable } from "@/lib/observations/recordable";
-import { noticeIfAfterLock } from "@/lib/observations/after-lock-notice";
 import { ingestContextFor } from "./context";
 import { safeOriginalName } from "./file-name";
 
@@ -255,9 +253,5 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
   recentlyChecked.delete(upload.id);
   // An upload replaces every plot: the values now in place are exactly the file's rows.
   remember(upload.assessmentId, { versionId: version.id, source: result.records });
-  // After the commit rather than inside it: commitVersion owns its transaction and offers no
-  // way in, so a crash in between can lose this notice (never the data).
-  await notify({ type: "upload-committed", trialId: upload.trialId, assessmentId: upload.assessmentId, versionNumber: version.number, actorId: user.id });
-  await noticeIfAfterLock(version, { trialId: upload.trialId, assessmentId: upload.assessmentId, actorId: user.id });
   return version;
 }
