@@ -1,5 +1,6 @@
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { mulberry32, type RandomSource } from "@/lib/layout/prng";
+import { writeRawValues } from "@/lib/observations/write-raw-values";
 
 /**
  * Invented raw values for the demo's active lettuce trials and the published onion trial, so
@@ -106,21 +107,7 @@ async function seedTrial(sequelize: Sequelize, transaction: Transaction | undefi
        VALUES (gen_random_uuid(), :assessmentId, :trialId, 1, 'manual', NULL, :userId, NULL, :rows, 0, now()) RETURNING id`,
       { replacements: { assessmentId: assessment.id, trialId, userId: technicianId, rows: rows.length }, type: QueryTypes.SELECT, transaction },
     );
-    await sequelize.query(
-      `INSERT INTO observation_values (version_id, plot_id, quadrats, species, "values")
-       SELECT :versionId, plot_id, array_agg(quadrat ORDER BY position), array_agg(''::text ORDER BY position), array_agg(value ORDER BY position)
-         FROM unnest(:plotIds::uuid[], :quadrats::int[], :values::float8[]) WITH ORDINALITY AS v(plot_id, quadrat, value, position)
-        GROUP BY plot_id`,
-      {
-        replacements: {
-          versionId: version.id,
-          plotIds: `{${rows.map((row) => row.plotId).join(",")}}`,
-          quadrats: `{${rows.map((row) => row.quadrat).join(",")}}`,
-          values: `{${rows.map((row) => row.value).join(",")}}`,
-        },
-        transaction,
-      },
-    );
+    await writeRawValues(sequelize, version.id, rows, transaction);
     // The audit trail has to account for every version, the demo's first one too, in the very
     // shape commitVersion gives the app's own versions. Not after the lock even in the trial
     // that starts locked: the story is that its data came in before the sign-off.

@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { randomUUID } from "node:crypto";
 import { createTrialFixture, removeTrialFixtures, type TrialFixture } from "../factories/trials";
 import { testDatabase } from "../support/database";
-import { writeRawValues } from "../factories/observations";
+import { writeRawValues } from "@/lib/observations/write-raw-values";
 
 let fixture: TrialFixture;
 

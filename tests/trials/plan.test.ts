@@ -8,7 +8,7 @@ import { changeStatus } from "@/lib/trials/readiness";
 import { trialAssessmentsSchema, trialBasicsSchema, trialDesignSchema, trialTreatmentsSchema } from "@/lib/validations/trial";
 import { Assessment, Plot, Site, Treatment, Trial, User } from "@/models";
 import { testDatabase } from "../support/database";
-import { writeRawValues } from "../factories/observations";
+import { writeRawValues } from "@/lib/observations/write-raw-values";
 
 // The lib functions reach the database through db(); point it at the test connection.
 const globalForDb = globalThis as unknown as { hoebenchSequelize?: unknown };

@@ -1,4 +1,4 @@
-import type { Sequelize } from "sequelize";
+import type { Sequelize, Transaction } from "sequelize";
 
 export interface RawValueRow {
   plotId: string;
@@ -11,10 +11,11 @@ export interface RawValueRow {
 const arrayLiteral = (items: readonly (string | number)[]) => `{${items.map((item) => `"${String(item).replace(/["\\]/g, (mark) => `\\${mark}`)}"`).join(",")}}`;
 
 /**
- * Writes raw values straight into a version's observation sets, as a seed or a repair
- * script would (browser specs cannot load the app's server-only commitVersion).
+ * Writes raw values straight into a version's observation sets in one statement, for writers
+ * outside the app's upload path: the demo seed, and tests (browser specs cannot load the
+ * server-only commitVersion). The version must exist; its sets were opened by its trigger.
  */
-export async function writeRawValues(sequelize: Sequelize, versionId: string, rows: readonly RawValueRow[]): Promise<void> {
+export async function writeRawValues(sequelize: Sequelize, versionId: string, rows: readonly RawValueRow[], transaction?: Transaction): Promise<void> {
   await sequelize.query(
     `INSERT INTO observation_values (version_id, plot_id, quadrats, species, "values")
      SELECT :versionId, plot_id, array_agg(quadrat ORDER BY position), array_agg(species ORDER BY position), array_agg(value ORDER BY position)
@@ -28,6 +29,7 @@ export async function writeRawValues(sequelize: Sequelize, versionId: string, ro
         species: arrayLiteral(rows.map((row) => row.species ?? "")),
         values: arrayLiteral(rows.map((row) => row.value)),
       },
+      transaction,
     },
   );
 }
