@@ -29,14 +29,19 @@ export async function objectSize(key: string): Promise<number | null> {
   return (await objectInfo(key))?.size ?? null;
 }
 
+/** Storage answered that there is no such object (as opposed to not answering at all). */
+function isMissingObject(error: unknown): boolean {
+  const status = (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+  return status === 404 || ["NotFound", "NoSuchKey"].includes((error as Error).name);
+}
+
 /** Size and entity tag of a stored object; the tag changes whenever the object is replaced. */
 export async function objectInfo(key: string): Promise<{ size: number; etag: string } | null> {
   try {
     const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
     return { size: head.ContentLength ?? 0, etag: head.ETag ?? "" };
   } catch (error) {
-    const status = (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
-    if (status === 404 || (error as Error).name === "NotFound") return null;
+    if (isMissingObject(error)) return null;
     throw unavailable();
   }
 }
@@ -47,8 +52,7 @@ export async function openObject(key: string): Promise<{ size: number; etag: str
     const response = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
     return { size: response.ContentLength ?? 0, etag: response.ETag ?? "", body: response.Body as AsyncIterable<Uint8Array> & { destroy?: () => void } };
   } catch (error) {
-    const status = (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
-    if (status === 404 || (error as Error).name === "NoSuchKey" || (error as Error).name === "NotFound") return null;
+    if (isMissingObject(error)) return null;
     throw unavailable();
   }
 }
@@ -61,7 +65,6 @@ export async function readObject(key: string): Promise<AsyncIterable<Uint8Array>
     throw unavailable();
   }
 }
-
 
 export async function writeObject(key: string, body: Buffer | string, contentType: string): Promise<void> {
   try {
