@@ -5,8 +5,8 @@ import { testDatabase } from "../support/database";
 import { signedInAs } from "../support/http";
 import { bringDatabaseBack, holdTable, takeDatabaseDownUnder } from "../support/services";
 
-afterEach(() => {
-  bringDatabaseBack();
+afterEach(async () => {
+  await bringDatabaseBack();
 });
 
 describe("when PostgreSQL goes away during a review approval", () => {
@@ -29,7 +29,7 @@ describe("when PostgreSQL goes away during a review approval", () => {
     const refused = await answer;
     expect(refused.status).toBe(503);
     expect((await refused.json()).error.message).toBe("The database is not answering. Nothing was saved; try again in a minute.");
-    bringDatabaseBack();
+    await bringDatabaseBack();
 
     testDatabase();
     const untilBack = async () => {
@@ -56,7 +56,7 @@ describe("when PostgreSQL goes away during a review approval", () => {
 });
 
 afterAll(async () => {
-  bringDatabaseBack();
+  await bringDatabaseBack();
   await removeTrialFixtures();
   await testDatabase().close();
 });

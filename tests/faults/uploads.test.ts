@@ -37,8 +37,8 @@ beforeAll(async () => {
   technician = await signedInAs("technician@hoebench.test");
 });
 
-afterEach(() => {
-  bringDatabaseBack();
+afterEach(async () => {
+  await bringDatabaseBack();
 });
 
 describe("when PostgreSQL goes away", () => {
@@ -57,7 +57,7 @@ describe("when PostgreSQL goes away", () => {
     const refused = await answer;
     expect(refused.status).toBe(503);
     expect(await refused.json()).toEqual({ error: { code: "UNAVAILABLE", message: "The database is not answering. Nothing was saved; try again in a minute." } });
-    bringDatabaseBack();
+    await bringDatabaseBack();
 
     expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(0);
     const [{ values }] = await testDatabase().query<{ values: number }>("SELECT count(*)::int AS values FROM observations WHERE assessment_id = :assessmentId", {
@@ -91,7 +91,7 @@ describe("when object storage goes away", () => {
 });
 
 afterAll(async () => {
-  bringDatabaseBack();
+  await bringDatabaseBack();
   await removeTrialFixtures();
   await testDatabase().close();
 });

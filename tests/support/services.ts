@@ -3,14 +3,25 @@ import path from "node:path";
 import { databaseFor, portsFor, POSTGRES_PORT, projectRoot, stateRoot, testStateName } from "@/scripts/lib/environment";
 import { psql } from "@/scripts/lib/postgres";
 
-/** Cuts the test database off as a stopped server would: every connection dropped, none accepted. */
+/**
+ * Cuts the test database off as a stopped server would: every connection dropped, none accepted.
+ * Each termination waits for its backend to exit, so the goodbye has reached every client, the
+ * test's own idle pool included, before the test reads again; otherwise a slow host lets a pooled
+ * connection take one more query and fail it.
+ */
 export function takeDatabaseDown(): void {
   const database = databaseFor("test");
   psql(POSTGRES_PORT, `ALTER DATABASE "${database}" WITH ALLOW_CONNECTIONS false`);
-  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = '${database}' AND pid <> pg_backend_pid()`);
+  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(pid, 5000) FROM pg_stat_activity WHERE datname = '${database}' AND pid <> pg_backend_pid()`);
 }
 
-export function bringDatabaseBack(): void {
+/**
+ * Lets connections in again. It first lets the event loop turn twice: the dropped connections'
+ * goodbyes sit unread in this process's sockets, and a query sent before they are read (an HTTP
+ * answer can be handled first in the same turn) would fail on a connection already gone.
+ */
+export async function bringDatabaseBack(): Promise<void> {
+  for (let turn = 0; turn < 2; turn += 1) await new Promise((resolve) => setImmediate(resolve));
   psql(POSTGRES_PORT, `ALTER DATABASE "${databaseFor("test")}" WITH ALLOW_CONNECTIONS true`);
 }
 
@@ -80,6 +91,6 @@ export async function holdTable(table: string): Promise<{ waiter: (queryStart: s
 export function takeDatabaseDownUnder(pid: number): void {
   const database = databaseFor("test");
   psql(POSTGRES_PORT, `ALTER DATABASE "${database}" WITH ALLOW_CONNECTIONS false`);
-  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(${Number(pid)})`);
-  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE datname = '${database}' AND pid <> pg_backend_pid()`);
+  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(${Number(pid)}, 5000)`);
+  psql(POSTGRES_PORT, `SELECT pg_terminate_backend(pid, 5000) FROM pg_stat_activity WHERE datname = '${database}' AND pid <> pg_backend_pid()`);
 }
