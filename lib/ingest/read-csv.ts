@@ -124,6 +124,6 @@ export async function readCsv(source: AsyncIterable<Uint8Array>, context: Ingest
     });
   });
 
-  if (fatal.length) return { format: null, records: [], problems: fatal, rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
+  if (fatal.length) return { format: null, values: { rows: [], plotNumbers: [], quadrats: [], species: [], values: [] }, problems: fatal, rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
   return { ...checker.finish(), sizeBytes, sha256: hash.digest("hex") };
 }

@@ -1,5 +1,5 @@
 import { readHeader, sameUnit, type ColumnMap } from "./header";
-import type { IngestContext, IngestProblem, IngestRecord, IngestResult } from "./types";
+import type { IngestContext, IngestProblem, IngestResult, IngestValues } from "./types";
 import { readNumberCell, readWholeNumber } from "./values";
 
 const MAX_PROBLEMS_SHOWN = 500;
@@ -40,7 +40,7 @@ export class RowChecker {
   /** 1 where a plot's quadrat has a value of any species. */
   private readonly quadratsWithValues: Uint8Array;
   private readonly speciesNumbers = new Map<string, number>();
-  private readonly records: IngestRecord[] = [];
+  private readonly values: IngestValues = { rows: [], plotNumbers: [], quadrats: [], species: [], values: [] };
   private readonly problems: IngestProblem[] = [];
   private problemCount = 0;
   private errors = 0;
@@ -185,16 +185,21 @@ export class RowChecker {
         message: `Row ${row}: ${reading.value} ${this.context.unit} for ${describeCell(plotNumber, quadrat, species)} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
       });
     }
-    this.records.push({ row, plotNumber, quadrat, species, value: reading.value });
+    const values = this.values;
+    values.rows.push(row);
+    values.plotNumbers.push(plotNumber);
+    values.quadrats.push(quadrat);
+    values.species.push(species);
+    values.values.push(reading.value);
   }
 
   finish(): IngestResult {
     if (!this.headerSeen) {
       this.report({ severity: "error", code: "empty-file", message: "The file is empty. Fill in the data sheet and upload it again." });
-    } else if (this.map && this.records.length === 0 && this.errorCount === 0) {
+    } else if (this.map && this.values.rows.length === 0 && this.errorCount === 0) {
       this.report({ severity: "error", code: "no-values", message: "The file has a header but no values. Fill in the data sheet and upload it again." });
     }
-    if (this.map && this.records.length > 0) {
+    if (this.map && this.values.rows.length > 0) {
       const missingPlots: number[] = [];
       const short: number[] = [];
       this.context.plots.forEach((plot, index) => {
@@ -221,6 +226,6 @@ export class RowChecker {
     if (this.problemCount > this.problems.length) {
       this.problems.push({ severity: "warning", code: "more-problems", message: `${this.problemCount - this.problems.length} further problems are not listed. Fix the ones above and upload again.` });
     }
-    return { format: this.map?.format ?? null, records: this.records, problems: this.problems, rowsRead: this.rowsRead };
+    return { format: this.map?.format ?? null, values: this.values, problems: this.problems, rowsRead: this.rowsRead };
   }
 }

@@ -1,3 +1,5 @@
+import type { ValueColumns } from "@/lib/observations/value-columns";
+
 export type ProblemSeverity = "error" | "warning";
 
 export type ProblemCode =
@@ -44,6 +46,20 @@ export interface IngestRecord {
   value: number;
 }
 
+/** A file's values in columns, with the line each came from. */
+export interface IngestValues extends ValueColumns {
+  rows: number[];
+}
+
+/** Values start to end as one object each (the preview, tests). */
+export function recordsOf(values: IngestValues, start = 0, end = values.rows.length): IngestRecord[] {
+  const records: IngestRecord[] = [];
+  for (let index = start; index < Math.min(end, values.rows.length); index += 1) {
+    records.push({ row: values.rows[index], plotNumber: values.plotNumbers[index], quadrat: values.quadrats[index], species: values.species[index], value: values.values[index] });
+  }
+  return records;
+}
+
 export interface IngestContext {
   plots: { number: number; treatmentCode: string }[];
   quadratsPerPlot: number;
@@ -62,7 +78,7 @@ export const defaultIngestLimits: IngestLimits = { maxBytes: 20 * 1024 * 1024, m
 
 export interface IngestResult {
   format: "long" | "wide" | null;
-  records: IngestRecord[];
+  values: IngestValues;
   problems: IngestProblem[];
   rowsRead: number;
 }

@@ -3,18 +3,14 @@ import { randomUUID } from "node:crypto";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type pg from "pg";
-import { AuditEvent, DatasetVersion } from "@/models";
+import { AuditEvent } from "@/models";
 import { notify } from "@/lib/notifications/notify";
 import type { VersionSource } from "@/models/DatasetVersion";
 import { copyValues, encodeValues } from "./copy-values";
 import { groupValuesByPlot } from "./group-values";
+import { columnsOf, type PlotValue, type ValueColumns } from "./value-columns";
 
-export interface NewValue {
-  plotNumber: number;
-  quadrat: number;
-  species: string;
-  value: number;
-}
+export type NewValue = PlotValue;
 
 export interface CommitRequest {
   trialId: string;
@@ -24,8 +20,11 @@ export interface CommitRequest {
   uploadId?: string;
   /** An upload replaces the whole data set; a per-plot entry replaces those plots only. */
   replacePlotNumbers?: number[];
-  values: NewValue[];
+  /** A few values as objects, or a file's many as columns. */
+  values: NewValue[] | ValueColumns;
   reason?: string;
+  /** A check made alongside the commit (the stored file is still the one read); if it fails, nothing is written. */
+  confirmed?: Promise<void>;
 }
 
 export interface CommittedVersion {
@@ -45,6 +44,38 @@ async function lockAssessment(sequelize: Sequelize, request: CommitRequest, tran
   return row.status;
 }
 
+/**
+ * Inserts the version numbered after the assessment's last one (the assessment row is locked,
+ * so the number cannot be taken meanwhile) and gives its number. Its trigger opens the sets.
+ */
+async function insertVersion(sequelize: Sequelize, versionId: string, request: CommitRequest, valueCount: number, reason: string | null, transaction: Transaction): Promise<number> {
+  const scope = request.replacePlotNumbers
+    ? "(SELECT array_agg(id) FROM plots WHERE trial_id = :trialId AND number = ANY (ARRAY[:plotNumbers]::int[]))"
+    : "NULL";
+  const [{ number }] = await sequelize.query<{ number: number }>(
+    `INSERT INTO dataset_versions (id, assessment_id, trial_id, number, source, upload_id, created_by_id, reason, rows_added, rows_replaced, scope_plot_ids, created_at)
+     SELECT :versionId, :assessmentId, :trialId, COALESCE(MAX(number), 0) + 1, :source, :uploadId, :userId, :reason, :rowsAdded, 0, ${scope}, now()
+       FROM dataset_versions WHERE assessment_id = :assessmentId
+     RETURNING number`,
+    {
+      replacements: {
+        versionId,
+        assessmentId: request.assessmentId,
+        trialId: request.trialId,
+        source: request.source,
+        uploadId: request.uploadId ?? null,
+        userId: request.userId,
+        reason,
+        rowsAdded: valueCount,
+        plotNumbers: request.replacePlotNumbers ?? [],
+      },
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
+  return number;
+}
+
 /** Sequelize keeps the pg client of a transaction here; COPY has to run on that very client. */
 function clientOf(transaction: Transaction): pg.ClientBase {
   const client = (transaction as unknown as { connection?: pg.ClientBase }).connection;
@@ -59,6 +90,8 @@ function clientOf(transaction: Transaction): pg.ClientBase {
  * overwritten; the new ones go in with one binary COPY, a row per plot.
  */
 export async function commitVersion(sequelize: Sequelize, request: CommitRequest): Promise<CommittedVersion> {
+  const columns = Array.isArray(request.values) ? columnsOf(request.values) : request.values;
+  const valueCount = columns.plotNumbers.length;
   return sequelize.transaction(async (transaction) => {
     const status = await lockAssessment(sequelize, request, transaction);
     if (status === "published") throw new AppError("CONFLICT", "This trial is published; its data can no longer change.");
@@ -69,63 +102,48 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       ]);
     }
 
-    const plots = await sequelize.query<{ id: string; number: number }>(
-      "SELECT id, number FROM plots WHERE trial_id = :trialId",
-      { replacements: { trialId: request.trialId }, type: QueryTypes.SELECT, transaction },
-    );
-    const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
-    const unknown = request.values.find((value) => !plotIds.has(value.plotNumber));
-    if (unknown) throw new AppError("INVALID_INPUT", `Plot ${unknown.plotNumber} is not in this trial.`);
-
-    const [{ next }] = await sequelize.query<{ next: number }>(
-      "SELECT COALESCE(MAX(number), 0) + 1 AS next FROM dataset_versions WHERE assessment_id = :assessmentId",
-      { replacements: { assessmentId: request.assessmentId }, type: QueryTypes.SELECT, transaction },
-    );
-    // Named here, so the values can be encoded for their COPY while the version is inserted.
+    // Asked back to back on the transaction's connection: while the database opens the
+    // version's observation sets (its insert trigger), this thread groups and encodes the values.
     const versionId = randomUUID();
-    const creating = DatasetVersion.create(
-      {
-        id: versionId,
-        assessmentId: request.assessmentId,
-        trialId: request.trialId,
-        number: next,
-        source: request.source,
-        uploadId: request.uploadId ?? null,
-        createdById: request.userId,
-        reason,
-        rowsAdded: request.values.length,
-        rowsReplaced: 0,
-        scopePlotIds: request.replacePlotNumbers ? request.replacePlotNumbers.map((number) => plotIds.get(number)).filter((id): id is string => Boolean(id)) : null,
-      },
-      { transaction },
-    );
-    // Checked and encoded while the database writes the version and its sets (a refusal rolls both back):
-    // one turn of the event loop puts the insert on the wire before this thread gets busy.
-    creating.catch(() => {});
-    await new Promise((resolve) => setImmediate(resolve));
-    const grouped = groupValuesByPlot(request.values, plots.map((plot) => plot.number));
-    const payload = grouped.length > 0 ? encodeValues(grouped, versionId, plotIds) : null;
-    const version = await creating;
+    const plotsRead = sequelize.query<{ id: string; number: number }>("SELECT id, number FROM plots WHERE trial_id = :trialId", {
+      replacements: { trialId: request.trialId },
+      type: QueryTypes.SELECT,
+      transaction,
+    });
+    const inserted = insertVersion(sequelize, versionId, request, valueCount, reason, transaction);
+    inserted.catch(() => {});
+    const plots = await plotsRead;
+    const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
+    const unknown = request.replacePlotNumbers?.find((number) => !plotIds.has(number));
+    if (unknown !== undefined) throw new AppError("INVALID_INPUT", `Plot ${unknown} is not in this trial.`);
+    // Refuses unknown plots and a second value for a cell too.
+    const grouped = groupValuesByPlot(columns, plots.map((plot) => plot.number));
+    const payload = grouped.length > 0 ? [...encodeValues(grouped, versionId, plotIds)] : null;
+    const next = await inserted;
 
     // The version's insert trigger has closed the earlier sets of the plots it covers.
-    const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
-      `SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int AS "rowsReplaced"
-         FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
-        WHERE s.replaced_in_version_id = :versionId`,
-      { replacements: { versionId: version.id }, type: QueryTypes.SELECT, transaction },
-    );
     if (payload) await copyValues(clientOf(transaction), payload);
     if (request.uploadId) {
       // Inside the same transaction, so a file can never become two versions.
       const [, marked] = (await sequelize.query(
         "UPDATE uploads SET status = 'committed', version_id = :versionId, updated_at = now() WHERE id = :uploadId AND status = 'checked'",
-        { replacements: { versionId: version.id, uploadId: request.uploadId }, transaction },
+        { replacements: { versionId, uploadId: request.uploadId }, transaction },
       )) as [unknown, { rowCount?: number } | number];
       if ((typeof marked === "number" ? marked : marked?.rowCount) !== 1) {
         throw new AppError("CONFLICT", "This file has already been committed, or was not checked.");
       }
     }
-    await version.update({ rowsReplaced }, { transaction });
+    const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
+      `UPDATE dataset_versions SET rows_replaced = (
+          SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int
+            FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
+           WHERE s.replaced_in_version_id = :versionId)
+        WHERE id = :versionId RETURNING rows_replaced AS "rowsReplaced"`,
+      { replacements: { versionId }, type: QueryTypes.SELECT, transaction },
+    );
+
+    // Awaited last, so it runs alongside everything above; a refusal rolls all of it back.
+    if (request.confirmed) await request.confirmed;
 
     const where = request.replacePlotNumbers ? `plot${request.replacePlotNumbers.length === 1 ? "" : "s"} ${request.replacePlotNumbers.join(", ")}` : "the whole assessment";
     await AuditEvent.create(
@@ -135,9 +153,9 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
         entityType: "assessment-data",
         entityId: request.assessmentId,
         action: rowsReplaced > 0 ? "update" : "create",
-        summary: `Version ${next}: ${request.values.length} value${request.values.length === 1 ? "" : "s"} for ${where} (${rowsReplaced} replaced)`,
+        summary: `Version ${next}: ${valueCount} value${valueCount === 1 ? "" : "s"} for ${where} (${rowsReplaced} replaced)`,
         oldValue: null,
-        newValue: { version: next, rowsAdded: request.values.length, rowsReplaced },
+        newValue: { version: next, rowsAdded: valueCount, rowsReplaced },
         source: request.source === "upload" ? `upload ${request.uploadId}` : "per-plot entry",
         reason,
         afterLock: status === "locked",
@@ -149,6 +167,6 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
     if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
     if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
-    return { id: version.id, number: next, rowsAdded: request.values.length, rowsReplaced };
+    return { id: versionId, number: next, rowsAdded: valueCount, rowsReplaced };
   });
 }

@@ -9,70 +9,106 @@ const SIGNATURE = Buffer.from("PGCOPY\n\xff\r\n\0", "latin1");
 const INT4_OID = 23;
 const TEXT_OID = 25;
 const FLOAT8_OID = 701;
+const ARRAY_HEAD = 20;
+/** Bytes per buffer of the payload: a few large writes, none too large to allocate at once. */
+const BATCH_BYTES = 256 * 1024;
+
+const uuidBytes = (uuid: string) => Buffer.from(uuid.replace(/-/g, ""), "hex");
+
+interface EncodedPlot {
+  plotId: Buffer;
+  species: Buffer[];
+  size: number;
+}
+
+/** A plot's row in bytes before writing it, so a batch is allocated once at its final size. */
+function measure(plot: PlotValues, plotId: Buffer, encodedSpecies: Map<string, Buffer>): EncodedPlot {
+  const count = plot.quadrats.length;
+  const species = new Array<Buffer>(count);
+  let speciesBytes = 0;
+  for (let index = 0; index < count; index += 1) {
+    const name = plot.species[index];
+    let bytes = encodedSpecies.get(name);
+    if (!bytes) encodedSpecies.set(name, (bytes = Buffer.from(name, "utf8")));
+    species[index] = bytes;
+    speciesBytes += bytes.length;
+  }
+  const size = 2 + (4 + 16) * 2 + (4 + ARRAY_HEAD + count * 8) + (4 + ARRAY_HEAD + count * 4 + speciesBytes) + (4 + ARRAY_HEAD + count * 12);
+  return { plotId, species, size };
+}
 
 /**
  * One row of PostgreSQL's binary COPY format for observation_values: [field count][version]
  * [plot][quadrats][species][values], each field after its byte length. An array is
  * [dimensions=1][has nulls=0][element type][length][lower bound=1] and then each element
- * after its byte length (arrayfuncs.c, array_send).
+ * after its byte length (arrayfuncs.c, array_send). Returns the offset after the row.
  */
-function encodeRow(versionId: Buffer, plotId: Buffer, plot: PlotValues, encodedSpecies: Map<string, Buffer>): Buffer {
+function writeRow(target: Buffer, view: DataView, start: number, versionId: Buffer, plot: PlotValues, encoded: EncodedPlot): number {
   const count = plot.quadrats.length;
-  const species = plot.species.map((name) => {
-    let bytes = encodedSpecies.get(name);
-    if (!bytes) encodedSpecies.set(name, (bytes = Buffer.from(name, "utf8")));
-    return bytes;
-  });
-  let speciesBytes = 0;
-  for (const bytes of species) speciesBytes += bytes.length;
-  const arrayHead = 20;
-  const quadratsSize = arrayHead + count * 8;
-  const speciesSize = arrayHead + count * 4 + speciesBytes;
-  const valuesSize = arrayHead + count * 12;
-  const row = Buffer.allocUnsafe(2 + (4 + 16) * 2 + 4 + quadratsSize + 4 + speciesSize + 4 + valuesSize);
-  let at = row.writeInt16BE(5, 0);
-  at = row.writeInt32BE(16, at);
-  at += versionId.copy(row, at);
-  at = row.writeInt32BE(16, at);
-  at += plotId.copy(row, at);
-  const arrayStart = (size: number, elementOid: number) => {
-    at = row.writeInt32BE(size, at);
-    at = row.writeInt32BE(1, at);
-    at = row.writeInt32BE(0, at);
-    at = row.writeInt32BE(elementOid, at);
-    at = row.writeInt32BE(count, at);
-    at = row.writeInt32BE(1, at);
+  let at = start;
+  view.setInt16(at, 5);
+  view.setInt32(at + 2, 16);
+  versionId.copy(target, at + 6);
+  view.setInt32(at + 22, 16);
+  encoded.plotId.copy(target, at + 26);
+  at += 42;
+  const arrayStart = (elementBytes: number, elementOid: number) => {
+    view.setInt32(at, ARRAY_HEAD + elementBytes);
+    view.setInt32(at + 4, 1);
+    view.setInt32(at + 8, 0);
+    view.setInt32(at + 12, elementOid);
+    view.setInt32(at + 16, count);
+    view.setInt32(at + 20, 1);
+    at += 4 + ARRAY_HEAD;
   };
-  arrayStart(quadratsSize, INT4_OID);
+  arrayStart(count * 8, INT4_OID);
   for (const quadrat of plot.quadrats) {
-    at = row.writeInt32BE(4, at);
-    at = row.writeInt32BE(quadrat, at);
+    view.setInt32(at, 4);
+    view.setInt32(at + 4, quadrat);
+    at += 8;
   }
-  arrayStart(speciesSize, TEXT_OID);
-  for (const bytes of species) {
-    at = row.writeInt32BE(bytes.length, at);
-    at += bytes.copy(row, at);
+  let speciesBytes = 0;
+  for (const bytes of encoded.species) speciesBytes += bytes.length;
+  arrayStart(count * 4 + speciesBytes, TEXT_OID);
+  for (const bytes of encoded.species) {
+    view.setInt32(at, bytes.length);
+    at += 4 + bytes.copy(target, at + 4);
   }
-  arrayStart(valuesSize, FLOAT8_OID);
+  arrayStart(count * 12, FLOAT8_OID);
   for (const value of plot.values) {
-    at = row.writeInt32BE(8, at);
-    at = row.writeDoubleBE(value, at);
+    view.setInt32(at, 8);
+    view.setFloat64(at + 4, value);
+    at += 12;
   }
-  return row;
+  return at;
 }
 
-const uuidBytes = (uuid: string) => Buffer.from(uuid.replace(/-/g, ""), "hex");
-
-function* binaryRows(plots: readonly PlotValues[], versionId: string, plotIds: Map<number, string>): Generator<Buffer> {
+/**
+ * A version's values in PostgreSQL's binary COPY format for observation_values, a row per
+ * plot, in batches of about BATCH_BYTES: signature and header first, the end marker last.
+ */
+export function* encodeValues(plots: readonly PlotValues[], versionId: string, plotIds: Map<number, string>): Generator<Buffer> {
   const header = Buffer.alloc(SIGNATURE.length + 8);
   SIGNATURE.copy(header);
   yield header;
   const version = uuidBytes(versionId);
   const encodedSpecies = new Map<string, Buffer>();
-  for (const plot of plots) {
-    const plotId = plotIds.get(plot.plotNumber);
-    if (!plotId) throw new Error(`plot ${plot.plotNumber} has no id`);
-    yield encodeRow(version, uuidBytes(plotId), plot, encodedSpecies);
+  let next = 0;
+  while (next < plots.length) {
+    const batch: EncodedPlot[] = [];
+    let size = 0;
+    for (; next < plots.length && (batch.length === 0 || size < BATCH_BYTES); next += 1) {
+      const plotId = plotIds.get(plots[next].plotNumber);
+      if (!plotId) throw new Error(`plot ${plots[next].plotNumber} has no id`);
+      const encoded = measure(plots[next], uuidBytes(plotId), encodedSpecies);
+      batch.push(encoded);
+      size += encoded.size;
+    }
+    const target = Buffer.allocUnsafe(size);
+    const view = new DataView(target.buffer, target.byteOffset, target.byteLength);
+    let at = 0;
+    for (let index = 0; index < batch.length; index += 1) at = writeRow(target, view, at, version, plots[next - batch.length + index], batch[index]);
+    yield target;
   }
   const trailer = Buffer.alloc(2);
   trailer.writeInt16BE(-1);
@@ -80,15 +116,10 @@ function* binaryRows(plots: readonly PlotValues[], versionId: string, plotIds: M
 }
 
 /**
- * A version's values as one binary COPY payload for observation_values, a row per plot.
- * Encoded ahead of the COPY, while the database is still busy with the version's own row.
+ * Sends an encoded payload with one binary COPY on the client that holds the version's
+ * transaction. Binary, so PostgreSQL parses no text.
  */
-export function encodeValues(plots: readonly PlotValues[], versionId: string, plotIds: Map<number, string>): Buffer {
-  return Buffer.concat([...binaryRows(plots, versionId, plotIds)]);
-}
-
-/** Sends an encoded payload with COPY on the client that holds the version's transaction. Binary, so PostgreSQL parses no text. */
-export async function copyValues(client: pg.ClientBase, payload: Buffer): Promise<void> {
+export async function copyValues(client: pg.ClientBase, payload: readonly Buffer[]): Promise<void> {
   const target = client.query(copyFrom('COPY observation_values (version_id, plot_id, quadrats, species, "values") FROM STDIN (FORMAT binary)'));
-  await pipeline(Readable.from([payload], { objectMode: false }), target);
+  await pipeline(Readable.from(payload, { objectMode: false }), target);
 }

@@ -1,11 +1,5 @@
 import { AppError } from "@/lib/errors";
-
-export interface PlotValue {
-  plotNumber: number;
-  quadrat: number;
-  species: string;
-  value: number;
-}
+import type { ValueColumns } from "./value-columns";
 
 /** One plot's values in the order they came, as observation_values stores them. */
 export interface PlotValues {
@@ -25,14 +19,17 @@ const MAX_TABLE_SLOTS = 8_000_000;
  * before the database, kept in place of a unique index that would cost a third of a large
  * commit). Plots must be known: `plotNumbers` lists the trial's plots.
  */
-export function groupValuesByPlot(values: readonly PlotValue[], plotNumbers: readonly number[]): PlotValues[] {
+export function groupValuesByPlot(columns: ValueColumns, plotNumbers: readonly number[]): PlotValues[] {
   const plotIndexes = new Map(plotNumbers.map((number, index) => [number, index]));
+  const { plotNumbers: plotOf, quadrats, species, values } = columns;
+  const count = plotOf.length;
   const speciesNumbers = new Map<string, number>();
   let highestQuadrat = 0;
-  for (const entry of values) {
-    if (!Number.isInteger(entry.quadrat) || entry.quadrat < 1 || entry.quadrat > MAX_QUADRAT) throw new AppError("INVALID_INPUT", `Quadrat ${entry.quadrat} is not a quadrat number.`);
-    if (entry.quadrat > highestQuadrat) highestQuadrat = entry.quadrat;
-    if (!speciesNumbers.has(entry.species)) speciesNumbers.set(entry.species, speciesNumbers.size);
+  for (let index = 0; index < count; index += 1) {
+    const quadrat = quadrats[index];
+    if (!Number.isInteger(quadrat) || quadrat < 1 || quadrat > MAX_QUADRAT) throw new AppError("INVALID_INPUT", `Quadrat ${quadrat} is not a quadrat number.`);
+    if (quadrat > highestQuadrat) highestQuadrat = quadrat;
+    if (!speciesNumbers.has(species[index])) speciesNumbers.set(species[index], speciesNumbers.size);
   }
   const slotsPerPlot = speciesNumbers.size * (highestQuadrat + 1);
   const tableSize = slotsPerPlot * plotNumbers.length;
@@ -42,22 +39,24 @@ export function groupValuesByPlot(values: readonly PlotValue[], plotNumbers: rea
 
   const groups: (PlotValues | undefined)[] = new Array(plotNumbers.length);
   const order: PlotValues[] = [];
-  for (const entry of values) {
-    const plotIndex = plotIndexes.get(entry.plotNumber);
-    if (plotIndex === undefined) throw new AppError("INVALID_INPUT", `Plot ${entry.plotNumber} is not in this trial.`);
-    const slot = plotIndex * slotsPerPlot + speciesNumbers.get(entry.species)! * (highestQuadrat + 1) + entry.quadrat;
+  for (let index = 0; index < count; index += 1) {
+    const plotNumber = plotOf[index];
+    const plotIndex = plotIndexes.get(plotNumber);
+    if (plotIndex === undefined) throw new AppError("INVALID_INPUT", `Plot ${plotNumber} is not in this trial.`);
+    const quadrat = quadrats[index];
+    const slot = plotIndex * slotsPerPlot + speciesNumbers.get(species[index])! * (highestQuadrat + 1) + quadrat;
     const seen = table ? table[slot] === 1 : keys!.has(slot);
-    if (seen) throw new AppError("INVALID_INPUT", `Plot ${entry.plotNumber}, quadrat ${entry.quadrat}${entry.species ? `, ${entry.species}` : ""} has more than one value.`);
+    if (seen) throw new AppError("INVALID_INPUT", `Plot ${plotNumber}, quadrat ${quadrat}${species[index] ? `, ${species[index]}` : ""} has more than one value.`);
     if (table) table[slot] = 1;
     else keys!.add(slot);
     let group = groups[plotIndex];
     if (!group) {
-      group = groups[plotIndex] = { plotNumber: entry.plotNumber, quadrats: [], species: [], values: [] };
+      group = groups[plotIndex] = { plotNumber, quadrats: [], species: [], values: [] };
       order.push(group);
     }
-    group.quadrats.push(entry.quadrat);
-    group.species.push(entry.species);
-    group.values.push(entry.value);
+    group.quadrats.push(quadrat);
+    group.species.push(species[index]);
+    group.values.push(values[index]);
   }
   return order;
 }

@@ -1,10 +1,11 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
+import { createHash, randomUUID } from "node:crypto";
 import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import { AppError, notFound } from "@/lib/errors";
 import { readCsv } from "@/lib/ingest/read-csv";
-import type { IngestProblem, IngestRecord } from "@/lib/ingest/types";
+import { recordsOf, type IngestProblem, type IngestRecord } from "@/lib/ingest/types";
+import { columnsOf, type ValueColumns } from "@/lib/observations/value-columns";
 import { commitVersion, type CommittedVersion } from "@/lib/observations/commit-version";
 import { currentRawValues } from "@/lib/data/observations";
 import { objectInfo, openObject, presignUpload } from "@/lib/storage/objects";
@@ -87,21 +88,33 @@ async function loadUpload(uploadId: string): Promise<Upload> {
  * reuses the parse instead of reading the file again, when storage still holds the very
  * same object (same entity tag) and the plots have not changed.
  */
-const recentlyChecked = new Map<string, { etag: string; plotCount: number; result: ReadCsvResult }>();
+const recentlyChecked = new Map<string, { etag: string; plotsDigest: string; result: ReadCsvResult }>();
 const RECENT_LIMIT = 4;
+
+/** The plots a file is checked against, numbers with treatment codes, as one digest; made alike here and in the database. */
+const plotsDigest = (plots: readonly { number: number; treatmentCode: string }[]) =>
+  createHash("md5").update(plots.map((plot) => `${plot.number}:${plot.treatmentCode}`).join(",")).digest("hex");
+
+async function plotsDigestOf(trialId: string): Promise<string> {
+  const [{ digest }] = await db().query<{ digest: string }>(
+    `SELECT md5(COALESCE(string_agg(p.number || ':' || t.code, ',' ORDER BY p.number), '')) AS digest
+       FROM plots p JOIN treatments t ON t.id = p.treatment_id WHERE p.trial_id = :trialId`,
+    { replacements: { trialId }, type: QueryTypes.SELECT },
+  );
+  return digest;
+}
+
+/** Whether storage still holds the very object a remembered parse was made from, checked against the same plots. */
+async function stillAsChecked(upload: Upload, cached: { etag: string; plotsDigest: string }): Promise<boolean> {
+  const [info, digest] = await Promise.all([objectInfo(upload.objectKey), plotsDigestOf(upload.trialId)]);
+  if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
+  return Boolean(info.etag) && info.etag === cached.etag && digest === cached.plotsDigest;
+}
 
 async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   // Storage and the database are asked at once.
   const contextRead = ingestContextFor(upload.trialId, upload.assessmentId);
   contextRead.catch(() => {});
-  const cached = recentlyChecked.get(upload.id);
-  if (cached) {
-    // The parse is reused only for the very same stored object (entity tag) and plots.
-    const info = await objectInfo(upload.objectKey);
-    if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
-    const context = await contextRead;
-    if (info.etag && cached.etag === info.etag && cached.plotCount === context.plots.length) return cached.result;
-  }
   // One request gives the size, the entity tag and the bytes.
   const stored = await openObject(upload.objectKey);
   if (stored === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
@@ -112,7 +125,7 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   const context = await contextRead;
   const result = await readCsv(stored.body, context);
   recentlyChecked.delete(upload.id);
-  recentlyChecked.set(upload.id, { etag: stored.etag, plotCount: context.plots.length, result });
+  recentlyChecked.set(upload.id, { etag: stored.etag, plotsDigest: plotsDigest(context.plots), result });
   while (recentlyChecked.size > RECENT_LIMIT) recentlyChecked.delete(recentlyChecked.keys().next().value!);
   return result;
 }
@@ -121,11 +134,11 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
  * The values in place, keyed by plot, quadrat and species (case aside), for the preview's
  * change summary. A version never changes once written, so the values current at an
  * assessment's latest version can be kept: after an upload commits, they are exactly the
- * file's rows, and the next check of that assessment needs no 100,000-row read.
+ * file's values, and the next check of that assessment needs no 100,000-row read.
  */
 interface CurrentValues {
   versionId: string;
-  source: readonly { plotNumber: number; quadrat: number; species: string; value: number }[];
+  source: ValueColumns;
   index?: ValueIndex;
 }
 
@@ -140,13 +153,13 @@ function remember(assessmentId: string, values: CurrentValues): void {
   while (currentByAssessment.size > RECENT_LIMIT) currentByAssessment.delete(currentByAssessment.keys().next().value!);
 }
 
-function indexValues(values: CurrentValues["source"]): ValueIndex {
+function indexValues(values: ValueColumns): ValueIndex {
   const index: ValueIndex = new Map();
-  for (const entry of values) {
-    const species = entry.species.toLowerCase();
+  for (let at = 0; at < values.plotNumbers.length; at += 1) {
+    const species = values.species[at].toLowerCase();
     let bySlot = index.get(species);
     if (!bySlot) index.set(species, (bySlot = new Map()));
-    bySlot.set(entry.plotNumber * 64 + entry.quadrat, entry.value);
+    bySlot.set(values.plotNumbers[at] * 64 + values.quadrats[at], values.values[at]);
   }
   return index;
 }
@@ -159,46 +172,46 @@ async function currentValuesOf(assessmentId: string): Promise<CurrentValues | nu
   if (!latest) return null;
   let current = currentByAssessment.get(assessmentId);
   if (current?.versionId !== latest.id) {
-    current = { versionId: latest.id, source: await currentRawValues(assessmentId) };
+    current = { versionId: latest.id, source: columnsOf(await currentRawValues(assessmentId)) };
     remember(assessmentId, current);
   }
   return current;
 }
 
-const sameCell = (a: { plotNumber: number; quadrat: number; species: string }, b: { plotNumber: number; quadrat: number; species: string }) =>
-  a.plotNumber === b.plotNumber && a.quadrat === b.quadrat && (a.species === b.species || a.species.toLowerCase() === b.species.toLowerCase());
-
 /** A corrected file usually lists the same cells in the same order as the one before: then no lookups are needed. */
-function compareInStep(records: IngestRecord[], source: CurrentValues["source"]): ChangeSummary | null {
-  if (records.length !== source.length) return null;
+function compareInStep(file: ValueColumns, before: ValueColumns): ChangeSummary | null {
+  const count = file.plotNumbers.length;
+  if (count !== before.plotNumbers.length) return null;
   const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
-  for (let index = 0; index < records.length; index += 1) {
-    const record = records[index];
-    const before = source[index];
-    if (!sameCell(record, before)) return null;
-    if (before.value === record.value) summary.unchanged += 1;
+  for (let at = 0; at < count; at += 1) {
+    if (file.plotNumbers[at] !== before.plotNumbers[at] || file.quadrats[at] !== before.quadrats[at]) return null;
+    const species = file.species[at];
+    const speciesBefore = before.species[at];
+    if (species !== speciesBefore && species.toLowerCase() !== speciesBefore.toLowerCase()) return null;
+    if (before.values[at] === file.values[at]) summary.unchanged += 1;
     else summary.changed += 1;
   }
   return summary;
 }
 
-function compare(records: IngestRecord[], current: CurrentValues | null): ChangeSummary {
-  if (!current) return { added: records.length, changed: 0, unchanged: 0, removed: 0 };
-  const inStep = compareInStep(records, current.source);
+function compare(file: ValueColumns, current: CurrentValues | null): ChangeSummary {
+  const count = file.plotNumbers.length;
+  if (!current) return { added: count, changed: 0, unchanged: 0, removed: 0 };
+  const inStep = compareInStep(file, current.source);
   if (inStep) return inStep;
   current.index ??= indexValues(current.source);
   const existing = current.index;
   const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
   let lastSpecies: string | null = null;
   let bySlot: Map<number, number> | undefined;
-  for (const record of records) {
-    if (record.species !== lastSpecies) {
-      lastSpecies = record.species;
-      bySlot = existing.get(record.species.toLowerCase());
+  for (let at = 0; at < count; at += 1) {
+    if (file.species[at] !== lastSpecies) {
+      lastSpecies = file.species[at];
+      bySlot = existing.get(lastSpecies.toLowerCase());
     }
-    const before = bySlot?.get(record.plotNumber * 64 + record.quadrat);
+    const before = bySlot?.get(file.plotNumbers[at] * 64 + file.quadrats[at]);
     if (before === undefined) summary.added += 1;
-    else if (before === record.value) summary.unchanged += 1;
+    else if (before === file.values[at]) summary.unchanged += 1;
     else summary.changed += 1;
   }
   // Keys are unique on both sides, so whatever was not met again is removed.
@@ -228,30 +241,56 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
     problems: result.problems,
     errors,
     warnings: result.problems.length - errors,
-    preview: result.records.slice(0, PREVIEW_ROWS),
-    changes: compare(result.records, await current),
+    preview: recordsOf(result.values, 0, PREVIEW_ROWS),
+    changes: compare(result.values, await current),
   };
 }
 
-/** Commits a checked file as the assessment's next version; the file is read again and must not have changed. */
+/** The remembered parse turned out not to match what storage holds now. */
+class StoredFileChanged extends Error {}
+
+/**
+ * Commits a checked file as the assessment's next version; the file must not have changed.
+ * A parse remembered from the check is committed while storage confirms, in parallel, that
+ * it still holds that very object (a confirmation that fails rolls the commit back); without
+ * one, or if the object changed, the file is read and checked again.
+ */
 export async function commitUpload(user: SessionUser, uploadId: string, reason?: string): Promise<CommittedVersion> {
-  const sequelize = db();
+  db();
   const upload = await loadUpload(uploadId);
   if (upload.status !== "checked") throw new AppError("CONFLICT", "Check the file and fix its errors before committing it.");
-  const result = await readStoredFile(upload);
+  const cached = recentlyChecked.get(upload.id);
+  if (cached) {
+    const confirmed = stillAsChecked(upload, cached).then((same) => {
+      if (!same) throw new StoredFileChanged();
+    });
+    // Awaited inside the commit; a commit refused for another reason first leaves it unawaited.
+    confirmed.catch(() => {});
+    try {
+      return await commitChecked(user, upload, cached.result, reason, confirmed);
+    } catch (error) {
+      if (!(error instanceof StoredFileChanged)) throw error;
+      recentlyChecked.delete(upload.id);
+    }
+  }
+  return commitChecked(user, upload, await readStoredFile(upload), reason);
+}
+
+async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvResult, reason: string | undefined, confirmed?: Promise<void>): Promise<CommittedVersion> {
   if (result.sha256 !== upload.sha256) throw new AppError("CONFLICT", "The stored file changed after it was checked. Check it again.");
   if (result.problems.some((problem) => problem.severity === "error")) throw new AppError("CONFLICT", "The file has errors; fix them and upload it again.");
-  const version = await commitVersion(sequelize, {
+  const version = await commitVersion(db(), {
     trialId: upload.trialId,
     assessmentId: upload.assessmentId,
     userId: user.id,
     source: "upload",
     uploadId: upload.id,
-    values: result.records,
+    values: result.values,
     reason,
+    confirmed,
   });
   recentlyChecked.delete(upload.id);
   // An upload replaces every plot: the values now in place are exactly the file's rows.
-  remember(upload.assessmentId, { versionId: version.id, source: result.records });
+  remember(upload.assessmentId, { versionId: version.id, source: result.values });
   return version;
 }

@@ -76,6 +76,28 @@ describe("uploading a data file", () => {
     expect(body.changes).toEqual({ added: 1, changed: 1, unchanged: 21, removed: 2 });
   });
 
+  it("refuses to commit a file that was replaced in storage after its check, and writes nothing", async () => {
+    const checkedFile = goodFile(3);
+    const swapped = goodFile(5); // the same size, other values: the signed PUT allows it
+    expect(swapped.length).toBe(checkedFile.length);
+    const started = await technician.request("/api/uploads", {
+      method: "POST",
+      json: { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, fileName: "swap.csv", sizeBytes: checkedFile.length },
+    });
+    const { uploadId, putUrl, contentType } = await started.json();
+    const put = (body: string) => fetch(putUrl, { method: "PUT", headers: { "content-type": contentType }, body });
+    expect((await put(checkedFile)).status).toBe(200);
+    expect((await (await technician.request(`/api/uploads/${uploadId}/check`, { method: "POST" })).json()).status).toBe("checked");
+    expect((await put(swapped)).status).toBe(200);
+    const versionsBefore = await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } });
+
+    const commit = await technician.request(`/api/uploads/${uploadId}/commit`, { method: "POST", json: {} });
+    expect(commit.status).toBe(409);
+    expect((await commit.json()).error.message).toBe("The stored file changed after it was checked. Check it again.");
+    expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(versionsBefore);
+    expect((await Upload.findByPk(uploadId))?.status).toBe("checked");
+  });
+
   const badFiles: [string, string | Uint8Array, string][] = [
     ["an empty file", "", "The file is empty"],
     ["a workbook", new Uint8Array([0x50, 0x4b, 0x03, 0x04, 9, 9, 9, 9]), "not a CSV file"],

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { readCsv } from "@/lib/ingest/read-csv";
+import { recordsOf } from "@/lib/ingest/types";
 import type { IngestContext } from "@/lib/ingest/types";
 
 const plots = [101, 102, 103, 201, 202, 203].map((number, index) => ({ number, treatmentCode: `T${(index % 3) + 1}` }));
@@ -16,8 +17,8 @@ describe("reading a data file", () => {
     const result = await readCsv(chunks(fullLongFile), context);
     expect(result.problems).toEqual([]);
     expect(result.format).toBe("long");
-    expect(result.records).toHaveLength(12);
-    expect(result.records[0]).toEqual({ row: 2, plotNumber: 101, quadrat: 1, species: "", value: 101 % 7 + 1 });
+    expect(recordsOf(result.values)).toHaveLength(12);
+    expect(recordsOf(result.values)[0]).toEqual({ row: 2, plotNumber: 101, quadrat: 1, species: "", value: 101 % 7 + 1 });
     expect(result.sizeBytes).toBe(Buffer.byteLength(fullLongFile));
   });
 
@@ -26,14 +27,14 @@ describe("reading a data file", () => {
     const half = Math.floor(fullLongFile.length / 2);
     const result = await readCsv(chunks(fullLongFile.slice(0, half), fullLongFile.slice(half)), context);
     expect(result.sha256).toBe(createHash("sha256").update(fullLongFile).digest("hex"));
-    expect(result.records).toHaveLength(12);
+    expect(recordsOf(result.values)).toHaveLength(12);
   });
 
   it("takes the wide layout with one column per quadrat, and a BOM", async () => {
     const file = "\ufeffplot,q1,q2\n101,3,4\n102,0,1\n103,5,\n201,1,1\n202,2,2\n203,9,8\n";
     const result = await readCsv(chunks(file), context);
     expect(result.format).toBe("wide");
-    expect(result.records).toHaveLength(11);
+    expect(recordsOf(result.values)).toHaveLength(11);
     expect(result.problems).toEqual([
       expect.objectContaining({ severity: "warning", code: "no-value", row: 4, column: "q2" }),
       expect.objectContaining({ severity: "warning", code: "missing-quadrat", message: expect.stringContaining("Plot 103 has fewer than 2 quadrats") }),
@@ -80,7 +81,7 @@ describe("reading a data file", () => {
       "Row 42: plot 101, quadrat 1, Weed3 already has a value in row 4. Keep one of them.",
       "Row 43: plot 101, quadrat 1, WEED40 already has a value in row 41. Keep one of them.",
     ]);
-    expect(result.records).toHaveLength(40 + 1 + 5);
+    expect(recordsOf(result.values)).toHaveLength(40 + 1 + 5);
     expect(result.problems.find((p) => p.code === "missing-quadrat")?.message).toBe(
       "Plots 102, 103, 201, 202, 203 have fewer than 2 quadrats; the plot mean uses the quadrats present.",
     );
@@ -88,7 +89,7 @@ describe("reading a data file", () => {
 
   it("flags a value outside the plausible range but keeps it", async () => {
     const result = await readCsv(chunks("plot,quadrat,value\n101,1,950\n"), context);
-    expect(result.records.map((r) => r.value)).toEqual([950]);
+    expect(recordsOf(result.values).map((r: { value: number }) => r.value)).toEqual([950]);
     expect(result.problems.filter((p) => p.severity === "error")).toEqual([]);
   });
 
@@ -125,7 +126,7 @@ describe("reading a data file", () => {
     for (const [name, parts, code, message] of cases) {
       it(`refuses ${name}`, async () => {
         const result = await readCsv(chunks(...parts), context);
-        expect(result.records).toEqual([]);
+        expect(recordsOf(result.values)).toEqual([]);
         const errors = result.problems.filter((p) => p.severity === "error");
         expect(errors[0].code).toBe(code);
         expect(errors[0].message).toMatch(message);

@@ -1,15 +1,16 @@
 import { describe, expect, it } from "vitest";
-import { groupValuesByPlot, type PlotValue } from "@/lib/observations/group-values";
+import { groupValuesByPlot } from "@/lib/observations/group-values";
+import { columnsOf, type PlotValue } from "@/lib/observations/value-columns";
 
 describe("grouping a version's values by plot", () => {
   it("keeps each plot's values in the order they came, plots in order of first appearance", () => {
     const grouped = groupValuesByPlot(
-      [
+      columnsOf([
         { plotNumber: 102, quadrat: 2, species: "", value: 4 },
         { plotNumber: 101, quadrat: 1, species: "pigweed", value: 7 },
         { plotNumber: 102, quadrat: 1, species: "", value: 3 },
         { plotNumber: 101, quadrat: 1, species: "purslane", value: 0 },
-      ],
+      ]),
       [101, 102, 103],
     );
     expect(grouped).toEqual([
@@ -23,10 +24,10 @@ describe("grouping a version's values by plot", () => {
       { plotNumber: 101, quadrat: 3, species: "pigweed", value: 1 },
       { plotNumber: 101, quadrat: 3, species: "pigweed", value: 2 },
     ];
-    expect(() => groupValuesByPlot(twice, [101])).toThrow("Plot 101, quadrat 3, pigweed has more than one value.");
-    expect(() => groupValuesByPlot([{ plotNumber: 999, quadrat: 1, species: "", value: 1 }], [101])).toThrow("Plot 999 is not in this trial.");
-    expect(() => groupValuesByPlot([{ plotNumber: 101, quadrat: 0, species: "", value: 1 }], [101])).toThrow("Quadrat 0 is not a quadrat number.");
-    expect(() => groupValuesByPlot([{ plotNumber: 101, quadrat: 1.5, species: "", value: 1 }], [101])).toThrow("Quadrat 1.5 is not a quadrat number.");
+    expect(() => groupValuesByPlot(columnsOf(twice), [101])).toThrow("Plot 101, quadrat 3, pigweed has more than one value.");
+    expect(() => groupValuesByPlot(columnsOf([{ plotNumber: 999, quadrat: 1, species: "", value: 1 }]), [101])).toThrow("Plot 999 is not in this trial.");
+    expect(() => groupValuesByPlot(columnsOf([{ plotNumber: 101, quadrat: 0, species: "", value: 1 }]), [101])).toThrow("Quadrat 0 is not a quadrat number.");
+    expect(() => groupValuesByPlot(columnsOf([{ plotNumber: 101, quadrat: 1.5, species: "", value: 1 }]), [101])).toThrow("Quadrat 1.5 is not a quadrat number.");
   });
 
   it("tells duplicates apart from neighbours when the slots outgrow the table and keys are hashed instead", () => {
@@ -34,7 +35,7 @@ describe("grouping a version's values by plot", () => {
     const values: PlotValue[] = [];
     for (let species = 0; species < 60; species += 1) values.push({ plotNumber: 2, quadrat: 65_535, species: `s${species}`, value: species });
     values.push({ plotNumber: 3, quadrat: 1, species: "s0", value: 1 });
-    expect(groupValuesByPlot(values, [1, 2, 3]).map((plot) => plot.quadrats.length)).toEqual([60, 1]);
-    expect(() => groupValuesByPlot([...values, { plotNumber: 2, quadrat: 65_535, species: "s59", value: 9 }], [1, 2, 3])).toThrow("Plot 2, quadrat 65535, s59 has more than one value.");
+    expect(groupValuesByPlot(columnsOf(values), [1, 2, 3]).map((plot) => plot.quadrats.length)).toEqual([60, 1]);
+    expect(() => groupValuesByPlot(columnsOf([...values, { plotNumber: 2, quadrat: 65_535, species: "s59", value: 9 }]), [1, 2, 3])).toThrow("Plot 2, quadrat 65535, s59 has more than one value.");
   });
 });
