@@ -5,6 +5,15 @@
  * Prints one JSON object on the last line (contract: benchmarks.md).
  */
 
+import { spawnSync } from "node:child_process";
+import { APP_HEAP_FLAGS } from "./lib/app-heap";
+
+// The upload path runs in this process: it gets the heap the app's workers have.
+if (!APP_HEAP_FLAGS.every((flag) => process.execArgv.includes(flag))) {
+  const run = spawnSync(process.execPath, [...process.execArgv, ...APP_HEAP_FLAGS, ...process.argv.slice(1)], { stdio: "inherit" });
+  process.exit(run.status ?? 1);
+}
+
 process.env.HOEBENCH_TEST_SLOT = process.env.HOEBENCH_TEST_SLOT ?? "8";
 /** Timed runs of each side, after one untimed run each: app servers and PostgreSQL run warm. */
 const RUNS = 5;

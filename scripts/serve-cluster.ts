@@ -14,6 +14,7 @@ import cluster from "node:cluster";
 import os from "node:os";
 import path from "node:path";
 import { parseConfig } from "../lib/config";
+import { APP_HEAP_FLAGS } from "./lib/app-heap";
 
 const nextBin = path.join(__dirname, "..", "node_modules/next/dist/bin/next");
 const requested = Number(process.env.HOEBENCH_APP_WORKERS);
@@ -25,11 +26,9 @@ let exitCode = 0;
 const restarts: number[] = [];
 
 // Workers are plain node running Next's own CLI, without this script's TypeScript loader.
-// A larger young generation: server rendering makes many short-lived objects, and the default
-// semi-space had the collector running several times per page.
 // Each worker decides a request's client address where the connection arrives (see client-address.cjs).
 const workerFlags = [
-  "--max-semi-space-size=64",
+  ...APP_HEAP_FLAGS,
   "--require",
   path.join(__dirname, "client-address.cjs"),
   ...(process.env.HOEBENCH_WORKER_NODE_FLAGS ?? "").split(" ").filter(Boolean),

@@ -40,6 +40,12 @@ export class RowChecker {
   /** 1 where a plot's quadrat has a value of any species. */
   private readonly quadratsWithValues: Uint8Array;
   private readonly speciesNumbers = new Map<string, number>();
+  /**
+   * Each spelling met so far, with its species number and one shared copy of the name: the
+   * values keep that copy, so a 100,000-row file holds a few names instead of a string per row
+   * (which would outlive the row and be copied by the collector).
+   */
+  private readonly spellings = new Map<string, { number: number; name: string }>();
   private readonly values: IngestValues = { rows: [], plotNumbers: [], quadrats: [], species: [], values: [] };
   private readonly problems: IngestProblem[] = [];
   private problemCount = 0;
@@ -158,13 +164,7 @@ export class RowChecker {
       return;
     }
     const slot = plotIndex * this.stride + quadrat;
-    const speciesKey = species === "" ? "" : species.toLowerCase();
-    let speciesNumber = this.speciesNumbers.get(speciesKey);
-    if (speciesNumber === undefined) {
-      speciesNumber = this.speciesNumbers.size;
-      this.speciesNumbers.set(speciesKey, speciesNumber);
-      if (speciesNumber < SPECIES_TABLES) this.seen.push(new Int32Array(this.quadratsWithValues.length));
-    }
+    const { number: speciesNumber, name: speciesName } = this.speciesOf(species);
     const table = this.seen[speciesNumber];
     const overflowKey = speciesNumber * this.quadratsWithValues.length + slot;
     const earlier = table ? table[slot] : (this.seenOverflow.get(overflowKey) ?? 0);
@@ -189,8 +189,24 @@ export class RowChecker {
     values.rows.push(row);
     values.plotNumbers.push(plotNumber);
     values.quadrats.push(quadrat);
-    values.species.push(species);
+    values.species.push(speciesName);
     values.values.push(reading.value);
+  }
+
+  private speciesOf(written: string): { number: number; name: string } {
+    let spelling = this.spellings.get(written);
+    if (spelling === undefined) {
+      // Spellings that differ only in case are one species.
+      const key = written.toLowerCase();
+      let number = this.speciesNumbers.get(key);
+      if (number === undefined) {
+        number = this.speciesNumbers.size;
+        this.speciesNumbers.set(key, number);
+        if (number < SPECIES_TABLES) this.seen.push(new Int32Array(this.quadratsWithValues.length));
+      }
+      this.spellings.set(written, (spelling = { number, name: written }));
+    }
+    return spelling;
   }
 
   finish(): IngestResult {
