@@ -7,7 +7,7 @@ import { AuditEvent } from "@/models";
 import { notify } from "@/lib/notifications/notify";
 import type { VersionSource } from "@/models/DatasetVersion";
 import { copyValues, encodeValues } from "./copy-values";
-import { groupValuesByPlot } from "./group-values";
+import { groupValuesByPlot, type PlotValues } from "./group-values";
 import { columnsOf, type PlotValue, type ValueColumns } from "./value-columns";
 
 export type NewValue = PlotValue;
@@ -83,6 +83,76 @@ function clientOf(transaction: Transaction): pg.ClientBase {
   return client;
 }
 
+/** Encodes batch by batch, letting the event loop turn between batches so the transaction's queries move on meanwhile. */
+async function encodeInTurns(grouped: PlotValues[], versionId: string, plotIds: Map<number, string>): Promise<Buffer[]> {
+  const payload: Buffer[] = [];
+  for (const buffer of encodeValues(grouped, versionId, plotIds)) {
+    payload.push(buffer);
+    await new Promise((resolve) => setImmediate(resolve));
+  }
+  return payload;
+}
+
+interface VersionFacts {
+  request: CommitRequest;
+  versionId: string;
+  next: number;
+  valueCount: number;
+  status: string;
+  reason: string | null;
+}
+
+/**
+ * A new version's bookkeeping, in its transaction: the upload it came from is marked, the
+ * values it replaced (the earlier sets its insert closed) are counted, the change is audited
+ * and its notices are queued.
+ */
+async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transaction: Transaction): Promise<{ next: number; rowsReplaced: number }> {
+  const { request, versionId, next, valueCount, status, reason } = facts;
+  if (request.uploadId) {
+    // Inside the same transaction, so a file can never become two versions.
+    const [, marked] = (await sequelize.query(
+      "UPDATE uploads SET status = 'committed', version_id = :versionId, updated_at = now() WHERE id = :uploadId AND status = 'checked'",
+      { replacements: { versionId, uploadId: request.uploadId }, transaction },
+    )) as [unknown, { rowCount?: number } | number];
+    if ((typeof marked === "number" ? marked : marked?.rowCount) !== 1) {
+      throw new AppError("CONFLICT", "This file has already been committed, or was not checked.");
+    }
+  }
+  const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
+    `UPDATE dataset_versions SET rows_replaced = (
+        SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int
+          FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
+         WHERE s.replaced_in_version_id = :versionId)
+      WHERE id = :versionId RETURNING rows_replaced AS "rowsReplaced"`,
+    { replacements: { versionId }, type: QueryTypes.SELECT, transaction },
+  );
+
+  const where = request.replacePlotNumbers ? `plot${request.replacePlotNumbers.length === 1 ? "" : "s"} ${request.replacePlotNumbers.join(", ")}` : "the whole assessment";
+  await AuditEvent.create(
+    {
+      trialId: request.trialId,
+      userId: request.userId,
+      entityType: "assessment-data",
+      entityId: request.assessmentId,
+      action: rowsReplaced > 0 ? "update" : "create",
+      summary: `Version ${next}: ${valueCount} value${valueCount === 1 ? "" : "s"} for ${where} (${rowsReplaced} replaced)`,
+      oldValue: null,
+      newValue: { version: next, rowsAdded: valueCount, rowsReplaced },
+      source: request.source === "upload" ? `upload ${request.uploadId}` : "per-plot entry",
+      reason,
+      afterLock: status === "locked",
+    },
+    { transaction },
+  );
+  // Queued with the data, so a crash after the commit cannot lose them: the owner hears of a
+  // new upload, and the reviewers of any change made after their sign-off, with its reason.
+  const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
+  if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
+  if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
+  return { next, rowsReplaced };
+}
+
 /**
  * Writes a new numbered version of an assessment's data in one transaction: all of it or
  * none. The assessment row is locked first, so two commits at once become versions N and
@@ -102,71 +172,36 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       ]);
     }
 
-    // Asked back to back on the transaction's connection: while the database opens the
-    // version's observation sets (its insert trigger), this thread groups and encodes the values.
+    // The database works through the version's rows (its insert trigger opens the sets) and
+    // bookkeeping while this thread groups and encodes the values, turn by turn.
     const versionId = randomUUID();
     const plotsRead = sequelize.query<{ id: string; number: number }>("SELECT id, number FROM plots WHERE trial_id = :trialId", {
       replacements: { trialId: request.trialId },
       type: QueryTypes.SELECT,
       transaction,
     });
-    const inserted = insertVersion(sequelize, versionId, request, valueCount, reason, transaction);
-    inserted.catch(() => {});
-    const plots = await plotsRead;
-    const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
-    const unknown = request.replacePlotNumbers?.find((number) => !plotIds.has(number));
-    if (unknown !== undefined) throw new AppError("INVALID_INPUT", `Plot ${unknown} is not in this trial.`);
-    // Refuses unknown plots and a second value for a cell too.
-    const grouped = groupValuesByPlot(columns, plots.map((plot) => plot.number));
-    const payload = grouped.length > 0 ? [...encodeValues(grouped, versionId, plotIds)] : null;
-    const next = await inserted;
-
-    // The version's insert trigger has closed the earlier sets of the plots it covers.
-    if (payload) await copyValues(clientOf(transaction), payload);
-    if (request.uploadId) {
-      // Inside the same transaction, so a file can never become two versions.
-      const [, marked] = (await sequelize.query(
-        "UPDATE uploads SET status = 'committed', version_id = :versionId, updated_at = now() WHERE id = :uploadId AND status = 'checked'",
-        { replacements: { versionId, uploadId: request.uploadId }, transaction },
-      )) as [unknown, { rowCount?: number } | number];
-      if ((typeof marked === "number" ? marked : marked?.rowCount) !== 1) {
-        throw new AppError("CONFLICT", "This file has already been committed, or was not checked.");
-      }
-    }
-    const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
-      `UPDATE dataset_versions SET rows_replaced = (
-          SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int
-            FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
-           WHERE s.replaced_in_version_id = :versionId)
-        WHERE id = :versionId RETURNING rows_replaced AS "rowsReplaced"`,
-      { replacements: { versionId }, type: QueryTypes.SELECT, transaction },
+    const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then((next) =>
+      recordVersion(sequelize, { request, versionId, next, valueCount, status, reason }, transaction),
     );
-
+    recorded.catch(() => {});
+    let payload: Buffer[] | null;
+    try {
+      const plots = await plotsRead;
+      const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
+      const unknown = request.replacePlotNumbers?.find((number) => !plotIds.has(number));
+      if (unknown !== undefined) throw new AppError("INVALID_INPUT", `Plot ${unknown} is not in this trial.`);
+      // Refuses unknown plots and a second value for a cell too.
+      const grouped = groupValuesByPlot(columns, plots.map((plot) => plot.number));
+      payload = grouped.length > 0 ? await encodeInTurns(grouped, versionId, plotIds) : null;
+    } catch (error) {
+      // Nothing may still be using the transaction when it rolls back.
+      await recorded.catch(() => {});
+      throw error;
+    }
+    const { next, rowsReplaced } = await recorded;
+    if (payload) await copyValues(clientOf(transaction), payload);
     // Awaited last, so it runs alongside everything above; a refusal rolls all of it back.
     if (request.confirmed) await request.confirmed;
-
-    const where = request.replacePlotNumbers ? `plot${request.replacePlotNumbers.length === 1 ? "" : "s"} ${request.replacePlotNumbers.join(", ")}` : "the whole assessment";
-    await AuditEvent.create(
-      {
-        trialId: request.trialId,
-        userId: request.userId,
-        entityType: "assessment-data",
-        entityId: request.assessmentId,
-        action: rowsReplaced > 0 ? "update" : "create",
-        summary: `Version ${next}: ${valueCount} value${valueCount === 1 ? "" : "s"} for ${where} (${rowsReplaced} replaced)`,
-        oldValue: null,
-        newValue: { version: next, rowsAdded: valueCount, rowsReplaced },
-        source: request.source === "upload" ? `upload ${request.uploadId}` : "per-plot entry",
-        reason,
-        afterLock: status === "locked",
-      },
-      { transaction },
-    );
-    // Queued with the data, so a crash after the commit cannot lose them: the owner hears of a
-    // new upload, and the reviewers of any change made after their sign-off, with its reason.
-    const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
-    if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
-    if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
     return { id: versionId, number: next, rowsAdded: valueCount, rowsReplaced };
   });
 }

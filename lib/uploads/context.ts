@@ -23,3 +23,12 @@ export async function ingestContextFor(trialId: string, assessmentId: string): P
     plausibleMax: assessment.plausibleMax,
   };
 }
+
+/** Refuses an assessment that is not this trial's, without reading its plots. */
+export async function assertAssessmentOf(trialId: string, assessmentId: string): Promise<void> {
+  const found = await db().query("SELECT 1 FROM assessments WHERE id = :assessmentId AND trial_id = :trialId", {
+    replacements: { trialId, assessmentId },
+    type: QueryTypes.SELECT,
+  });
+  if (found.length === 0) throw notFound("assessment");
+}

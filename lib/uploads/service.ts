@@ -14,7 +14,7 @@ import type { SessionUser } from "@/lib/auth/session";
 import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
 import { assertRecordable } from "@/lib/observations/recordable";
-import { ingestContextFor } from "./context";
+import { assertAssessmentOf, ingestContextFor } from "./context";
 import { safeOriginalName } from "./file-name";
 
 export interface StartedUpload {
@@ -56,7 +56,7 @@ export async function uploadTrialId(uploadId: string): Promise<string> {
 /** Registers the file and hands back a presigned PUT; the object key never uses the file's own name. */
 export async function startUpload(user: SessionUser, trial: Trial, input: StartUploadInput): Promise<StartedUpload> {
   assertRecordable(trial);
-  await ingestContextFor(input.trialId, input.assessmentId);
+  await assertAssessmentOf(input.trialId, input.assessmentId);
   const id = randomUUID();
   const objectKey = `trials/${input.trialId}/assessments/${input.assessmentId}/uploads/${id}.csv`;
   const putUrl = await presignUpload(objectKey, CONTENT_TYPE, input.sizeBytes);
