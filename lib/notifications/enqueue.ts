@@ -19,9 +19,12 @@ async function plan(event: NotificationEvent, trial: Trial, reading: Reading): P
   const base = { trialId: trial.id, trialTitle: trial.title };
   switch (event.type) {
     case "upload-committed": {
+      // Owners uploading to their own trial are not told of it: nothing more to read.
+      const recipients = await activeUsers([trial.ownerId], event.actorId, reading);
+      if (recipients.length === 0) return null;
       const assessment = await Assessment.findByPk(event.assessmentId, { attributes: ["name"], ...reading });
       return {
-        recipients: await activeUsers([trial.ownerId], event.actorId, reading),
+        recipients,
         notice: notices.uploadCommitted({ ...base, assessmentId: event.assessmentId, assessmentName: assessment?.name ?? "an assessment", versionNumber: event.versionNumber, actorName: await actorName(event.actorId, reading) }),
       };
     }
