@@ -17,42 +17,40 @@ const uuidBytes = (uuid: string) => Buffer.from(uuid.replace(/-/g, ""), "hex");
 
 interface EncodedPlot {
   plotId: Buffer;
-  species: Buffer[];
+  names: Buffer[];
   size: number;
 }
 
 /** A plot's row in bytes before writing it, so a batch is allocated once at its final size. */
-function measure(plot: PlotValues, plotId: Buffer, encodedSpecies: Map<string, Buffer>): EncodedPlot {
+function measure(plot: PlotValues, plotId: Buffer, encodedNames: Map<string, Buffer>): EncodedPlot {
   const count = plot.quadrats.length;
-  const species = new Array<Buffer>(count);
-  let speciesBytes = 0;
-  for (let index = 0; index < count; index += 1) {
-    const name = plot.species[index];
-    let bytes = encodedSpecies.get(name);
-    if (!bytes) encodedSpecies.set(name, (bytes = Buffer.from(name, "utf8")));
-    species[index] = bytes;
-    speciesBytes += bytes.length;
-  }
-  const size = 2 + (4 + 16) * 2 + (4 + ARRAY_HEAD + count * 8) + (4 + ARRAY_HEAD + count * 4 + speciesBytes) + (4 + ARRAY_HEAD + count * 12);
-  return { plotId, species, size };
+  const names = plot.speciesNames.map((name) => {
+    let bytes = encodedNames.get(name);
+    if (!bytes) encodedNames.set(name, (bytes = Buffer.from(name, "utf8")));
+    return bytes;
+  });
+  let nameBytes = 0;
+  for (const bytes of names) nameBytes += bytes.length;
+  const size =
+    2 + (4 + 16) * 2 + (4 + ARRAY_HEAD + count * 8) + (4 + ARRAY_HEAD + names.length * 4 + nameBytes) + (4 + ARRAY_HEAD + count * 8) + (4 + ARRAY_HEAD + count * 12);
+  return { plotId, names, size };
 }
 
 /**
  * One row of PostgreSQL's binary COPY format for observation_values: [field count][version]
- * [plot][quadrats][species][values], each field after its byte length. An array is
- * [dimensions=1][has nulls=0][element type][length][lower bound=1] and then each element
- * after its byte length (arrayfuncs.c, array_send). Returns the offset after the row.
+ * [plot][quadrats][species names][species numbers][values], each field after its byte length.
+ * An array is [dimensions=1][has nulls=0][element type][length][lower bound=1] and then each
+ * element after its byte length (arrayfuncs.c, array_send). Returns the offset after the row.
  */
 function writeRow(target: Buffer, view: DataView, start: number, versionId: Buffer, plot: PlotValues, encoded: EncodedPlot): number {
-  const count = plot.quadrats.length;
   let at = start;
-  view.setInt16(at, 5);
+  view.setInt16(at, 6);
   view.setInt32(at + 2, 16);
   versionId.copy(target, at + 6);
   view.setInt32(at + 22, 16);
   encoded.plotId.copy(target, at + 26);
   at += 42;
-  const arrayStart = (elementBytes: number, elementOid: number) => {
+  const arrayStart = (count: number, elementBytes: number, elementOid: number) => {
     view.setInt32(at, ARRAY_HEAD + elementBytes);
     view.setInt32(at + 4, 1);
     view.setInt32(at + 8, 0);
@@ -61,20 +59,24 @@ function writeRow(target: Buffer, view: DataView, start: number, versionId: Buff
     view.setInt32(at + 20, 1);
     at += 4 + ARRAY_HEAD;
   };
-  arrayStart(count * 8, INT4_OID);
-  for (const quadrat of plot.quadrats) {
-    view.setInt32(at, 4);
-    view.setInt32(at + 4, quadrat);
-    at += 8;
-  }
-  let speciesBytes = 0;
-  for (const bytes of encoded.species) speciesBytes += bytes.length;
-  arrayStart(count * 4 + speciesBytes, TEXT_OID);
-  for (const bytes of encoded.species) {
+  const writeIntegers = (numbers: number[]) => {
+    arrayStart(numbers.length, numbers.length * 8, INT4_OID);
+    for (const number of numbers) {
+      view.setInt32(at, 4);
+      view.setInt32(at + 4, number);
+      at += 8;
+    }
+  };
+  writeIntegers(plot.quadrats);
+  let nameBytes = 0;
+  for (const bytes of encoded.names) nameBytes += bytes.length;
+  arrayStart(encoded.names.length, encoded.names.length * 4 + nameBytes, TEXT_OID);
+  for (const bytes of encoded.names) {
     view.setInt32(at, bytes.length);
     at += 4 + bytes.copy(target, at + 4);
   }
-  arrayStart(count * 12, FLOAT8_OID);
+  writeIntegers(plot.speciesNumbers);
+  arrayStart(plot.values.length, plot.values.length * 12, FLOAT8_OID);
   for (const value of plot.values) {
     view.setInt32(at, 8);
     view.setFloat64(at + 4, value);
@@ -92,7 +94,7 @@ export function* encodeValues(plots: readonly PlotValues[], versionId: string, p
   SIGNATURE.copy(header);
   yield header;
   const version = uuidBytes(versionId);
-  const encodedSpecies = new Map<string, Buffer>();
+  const encodedNames = new Map<string, Buffer>();
   let next = 0;
   while (next < plots.length) {
     const batch: EncodedPlot[] = [];
@@ -100,7 +102,7 @@ export function* encodeValues(plots: readonly PlotValues[], versionId: string, p
     for (; next < plots.length && (batch.length === 0 || size < BATCH_BYTES); next += 1) {
       const plotId = plotIds.get(plots[next].plotNumber);
       if (!plotId) throw new Error(`plot ${plots[next].plotNumber} has no id`);
-      const encoded = measure(plots[next], uuidBytes(plotId), encodedSpecies);
+      const encoded = measure(plots[next], uuidBytes(plotId), encodedNames);
       batch.push(encoded);
       size += encoded.size;
     }
@@ -120,6 +122,6 @@ export function* encodeValues(plots: readonly PlotValues[], versionId: string, p
  * transaction. Binary, so PostgreSQL parses no text.
  */
 export async function copyValues(client: pg.ClientBase, payload: readonly Buffer[]): Promise<void> {
-  const target = client.query(copyFrom('COPY observation_values (version_id, plot_id, quadrats, species, "values") FROM STDIN (FORMAT binary)'));
+  const target = client.query(copyFrom('COPY observation_values (version_id, plot_id, quadrats, species_names, species_numbers, "values") FROM STDIN (FORMAT binary)'));
   await pipeline(Readable.from(payload, { objectMode: false }), target);
 }

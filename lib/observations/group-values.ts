@@ -1,11 +1,15 @@
 import { AppError } from "@/lib/errors";
 import type { ValueColumns } from "./value-columns";
 
-/** One plot's values in the order they came, as observation_values stores them. */
+/**
+ * One plot's values in the order they came, as observation_values stores them: each value's
+ * species is its place (from 1) in the plot's list of names, each name listed once.
+ */
 export interface PlotValues {
   plotNumber: number;
   quadrats: number[];
-  species: string[];
+  speciesNames: string[];
+  speciesNumbers: number[];
   values: number[];
 }
 
@@ -38,24 +42,34 @@ export function groupValuesByPlot(columns: ValueColumns, plotNumbers: readonly n
   const keys = table ? null : new Set<number>();
 
   const groups: (PlotValues | undefined)[] = new Array(plotNumbers.length);
+  /** Per plot: the file's species number → its number in the plot's list. */
+  const listed: (Map<number, number> | undefined)[] = new Array(plotNumbers.length);
   const order: PlotValues[] = [];
   for (let index = 0; index < count; index += 1) {
     const plotNumber = plotOf[index];
     const plotIndex = plotIndexes.get(plotNumber);
     if (plotIndex === undefined) throw new AppError("INVALID_INPUT", `Plot ${plotNumber} is not in this trial.`);
     const quadrat = quadrats[index];
-    const slot = plotIndex * slotsPerPlot + speciesNumbers.get(species[index])! * (highestQuadrat + 1) + quadrat;
+    const speciesNumber = speciesNumbers.get(species[index])!;
+    const slot = plotIndex * slotsPerPlot + speciesNumber * (highestQuadrat + 1) + quadrat;
     const seen = table ? table[slot] === 1 : keys!.has(slot);
     if (seen) throw new AppError("INVALID_INPUT", `Plot ${plotNumber}, quadrat ${quadrat}${species[index] ? `, ${species[index]}` : ""} has more than one value.`);
     if (table) table[slot] = 1;
     else keys!.add(slot);
     let group = groups[plotIndex];
-    if (!group) {
-      group = groups[plotIndex] = { plotNumber, quadrats: [], species: [], values: [] };
+    let names = listed[plotIndex];
+    if (!group || !names) {
+      group = groups[plotIndex] = { plotNumber, quadrats: [], speciesNames: [], speciesNumbers: [], values: [] };
+      names = listed[plotIndex] = new Map();
       order.push(group);
     }
+    let listNumber = names.get(speciesNumber);
+    if (listNumber === undefined) {
+      listNumber = group.speciesNames.push(species[index]);
+      names.set(speciesNumber, listNumber);
+    }
     group.quadrats.push(quadrat);
-    group.species.push(species[index]);
+    group.speciesNumbers.push(listNumber);
     group.values.push(values[index]);
   }
   return order;

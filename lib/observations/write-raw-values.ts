@@ -17,10 +17,17 @@ const arrayLiteral = (items: readonly (string | number)[]) => `{${items.map((ite
  */
 export async function writeRawValues(sequelize: Sequelize, versionId: string, rows: readonly RawValueRow[], transaction?: Transaction): Promise<void> {
   await sequelize.query(
-    `INSERT INTO observation_values (version_id, plot_id, quadrats, species, "values")
-     SELECT :versionId, plot_id, array_agg(quadrat ORDER BY position), array_agg(species ORDER BY position), array_agg(value ORDER BY position)
-       FROM unnest(:plotIds::uuid[], :quadrats::int[], :species::text[], :values::float8[]) WITH ORDINALITY AS v(plot_id, quadrat, species, value, position)
-      GROUP BY plot_id`,
+    `WITH v AS (
+       SELECT * FROM unnest(:plotIds::uuid[], :quadrats::int[], :species::text[], :values::float8[]) WITH ORDINALITY AS v(plot_id, quadrat, species, value, position)
+     ), names AS (
+       SELECT plot_id, array_agg(species ORDER BY first) AS list
+         FROM (SELECT plot_id, species, min(position) AS first FROM v GROUP BY plot_id, species) met GROUP BY plot_id
+     )
+     INSERT INTO observation_values (version_id, plot_id, quadrats, species_names, species_numbers, "values")
+     SELECT :versionId, v.plot_id, array_agg(v.quadrat ORDER BY v.position), names.list,
+            array_agg(array_position(names.list, v.species) ORDER BY v.position), array_agg(v.value ORDER BY v.position)
+       FROM v JOIN names ON names.plot_id = v.plot_id
+      GROUP BY v.plot_id, names.list`,
     {
       replacements: {
         versionId,

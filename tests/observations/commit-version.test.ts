@@ -86,6 +86,34 @@ describe("committing a version of an assessment's data", () => {
     ]);
   });
 
+  it("gives back each value's species as written, in the order the values came, through each plot's list of names", async () => {
+    const fixture = await createTrialFixture();
+    const [first, second] = fixture.plots;
+    const values: NewValue[] = [
+      { plotNumber: first.number, quadrat: 1, species: "Pigweed", value: 4 },
+      { plotNumber: first.number, quadrat: 1, species: "", value: 1 },
+      { plotNumber: second.number, quadrat: 2, species: "purslane", value: 2 },
+      { plotNumber: first.number, quadrat: 2, species: "Pigweed", value: 6 },
+      { plotNumber: second.number, quadrat: 1, species: "Pigweed", value: 0 },
+    ];
+    await commitVersion(testDatabase(), { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id, source: "upload", values });
+    const byPlot = (plotId: string) => currentValues(fixture.assessment.id).then((rows) => rows.filter((row) => row.plotId === plotId).map(({ quadrat, species, value }) => ({ quadrat, species, value })));
+    expect(await byPlot(first.id)).toEqual([
+      { quadrat: 1, species: "Pigweed", value: 4 },
+      { quadrat: 1, species: "", value: 1 },
+      { quadrat: 2, species: "Pigweed", value: 6 },
+    ]);
+    expect(await byPlot(second.id)).toEqual([
+      { quadrat: 2, species: "purslane", value: 2 },
+      { quadrat: 1, species: "Pigweed", value: 0 },
+    ]);
+    const stored = await testDatabase().query<{ names: string[]; numbers: number[] }>(
+      "SELECT species_names AS names, species_numbers AS numbers FROM observation_values WHERE plot_id = :plotId",
+      { replacements: { plotId: first.id }, type: QueryTypes.SELECT },
+    );
+    expect(stored).toEqual([{ names: ["Pigweed", ""], numbers: [1, 2, 1] }]);
+  });
+
   it("refuses a value twice in one version, or outside its version's plots, and removes values with their assessment", async () => {
     const fixture = await createTrialFixture();
     const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id };
@@ -96,12 +124,18 @@ describe("committing a version of an assessment's data", () => {
     });
     const manual = await commitVersion(testDatabase(), { ...request, source: "manual", replacePlotNumbers: [101], values: [{ plotNumber: 101, quadrat: 1, species: "", value: 3 }] });
     // Straight SQL, as a seed or a repair script would write.
-    const insert = (plotId: string, quadrats: number[], values: number[]) =>
+    const insert = (plotId: string, quadrats: number[], values: number[], speciesNumbers?: number[]) =>
       testDatabase().query(
-        `INSERT INTO observation_values (version_id, plot_id, quadrats, species, "values")
-         VALUES (:versionId, :plotId, :quadrats::int[], :species::text[], :values::float8[])`,
+        `INSERT INTO observation_values (version_id, plot_id, quadrats, species_names, species_numbers, "values")
+         VALUES (:versionId, :plotId, :quadrats::int[], '{""}', :speciesNumbers::int[], :values::float8[])`,
         {
-          replacements: { versionId: manual.id, plotId, quadrats: `{${quadrats.join(",")}}`, species: `{${quadrats.map(() => '""').join(",")}}`, values: `{${values.join(",")}}` },
+          replacements: {
+            versionId: manual.id,
+            plotId,
+            quadrats: `{${quadrats.join(",")}}`,
+            speciesNumbers: `{${(speciesNumbers ?? quadrats.map(() => 1)).join(",")}}`,
+            values: `{${values.join(",")}}`,
+          },
         },
       );
     const plot = (number: number) => fixture.plots.find((candidate) => candidate.number === number)!.id;
@@ -111,6 +145,9 @@ describe("committing a version of an assessment's data", () => {
     await expect(insert(plot(101), [1, 2], [1])).rejects.toThrow(/observation_values_aligned/);
     await expect(insert(plot(101), [0], [1])).rejects.toThrow(/observation_values_aligned/);
     await expect(insert(plot(101), [], [])).rejects.toThrow(/observation_values_aligned/);
+    // A species number must name an entry of the plot's list of names (here one name).
+    await expect(insert(plot(101), [1], [1], [2])).rejects.toThrow(/observation_values_aligned/);
+    await expect(insert(plot(101), [1], [1], [0])).rejects.toThrow(/observation_values_aligned/);
     await insert(plot(101), [1, 2], [3, 4]);
     expect(await currentValues(fixture.assessment.id)).toMatchObject([
       { quadrat: 1, value: 3 },

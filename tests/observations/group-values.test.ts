@@ -14,8 +14,8 @@ describe("grouping a version's values by plot", () => {
       [101, 102, 103],
     );
     expect(grouped).toEqual([
-      { plotNumber: 102, quadrats: [2, 1], species: ["", ""], values: [4, 3] },
-      { plotNumber: 101, quadrats: [1, 1], species: ["pigweed", "purslane"], values: [7, 0] },
+      { plotNumber: 102, quadrats: [2, 1], speciesNames: [""], speciesNumbers: [1, 1], values: [4, 3] },
+      { plotNumber: 101, quadrats: [1, 1], speciesNames: ["pigweed", "purslane"], speciesNumbers: [1, 2], values: [7, 0] },
     ]);
   });
 
