@@ -5,9 +5,7 @@ import { db } from "@/lib/db/sequelize";
 import { AppError, notFound } from "@/lib/errors";
 import { readCsv } from "@/lib/ingest/read-csv";
 import { recordsOf, type IngestProblem, type IngestRecord } from "@/lib/ingest/types";
-import { columnsOf, type ValueColumns } from "@/lib/observations/value-columns";
 import { commitVersion, type CommittedVersion } from "@/lib/observations/commit-version";
-import { currentRawValues } from "@/lib/data/observations";
 import { objectInfo, openObject, presignUpload } from "@/lib/storage/objects";
 import type { ReadCsvResult } from "@/lib/ingest/read-csv";
 import type { SessionUser } from "@/lib/auth/session";
@@ -15,19 +13,13 @@ import type { StartUploadInput } from "@/lib/validations/uploads";
 import { Upload, type Trial } from "@/models";
 import { assertRecordable } from "@/lib/observations/recordable";
 import { assertAssessmentOf, ingestContextFor } from "./context";
+import { currentValuesOf, rememberCurrentValues, summarizeChanges, type ChangeSummary } from "./change-summary";
 import { safeOriginalName } from "./file-name";
 
 export interface StartedUpload {
   uploadId: string;
   putUrl: string;
   contentType: string;
-}
-
-export interface ChangeSummary {
-  added: number;
-  changed: number;
-  unchanged: number;
-  removed: number;
 }
 
 export interface CheckedUpload {
@@ -130,97 +122,6 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   return result;
 }
 
-/**
- * The values in place, keyed by plot, quadrat and species (case aside), for the preview's
- * change summary. A version never changes once written, so the values current at an
- * assessment's latest version can be kept: after an upload commits, they are exactly the
- * file's values, and the next check of that assessment needs no 100,000-row read.
- */
-interface CurrentValues {
-  versionId: string;
-  source: ValueColumns;
-  index?: ValueIndex;
-}
-
-/** Values by species (case aside), then by plot × 64 + quadrat: small-integer keys, no string per value. */
-type ValueIndex = Map<string, Map<number, number>>;
-
-const currentByAssessment = new Map<string, CurrentValues>();
-
-function remember(assessmentId: string, values: CurrentValues): void {
-  currentByAssessment.delete(assessmentId);
-  currentByAssessment.set(assessmentId, values);
-  while (currentByAssessment.size > RECENT_LIMIT) currentByAssessment.delete(currentByAssessment.keys().next().value!);
-}
-
-function indexValues(values: ValueColumns): ValueIndex {
-  const index: ValueIndex = new Map();
-  for (let at = 0; at < values.plotNumbers.length; at += 1) {
-    const species = values.species[at].toLowerCase();
-    let bySlot = index.get(species);
-    if (!bySlot) index.set(species, (bySlot = new Map()));
-    bySlot.set(values.plotNumbers[at] * 64 + values.quadrats[at], values.values[at]);
-  }
-  return index;
-}
-
-async function currentValuesOf(assessmentId: string): Promise<CurrentValues | null> {
-  const [latest] = await db().query<{ id: string }>(
-    "SELECT id FROM dataset_versions WHERE assessment_id = :assessmentId ORDER BY number DESC LIMIT 1",
-    { replacements: { assessmentId }, type: QueryTypes.SELECT },
-  );
-  if (!latest) return null;
-  let current = currentByAssessment.get(assessmentId);
-  if (current?.versionId !== latest.id) {
-    current = { versionId: latest.id, source: columnsOf(await currentRawValues(assessmentId)) };
-    remember(assessmentId, current);
-  }
-  return current;
-}
-
-/** A corrected file usually lists the same cells in the same order as the one before: then no lookups are needed. */
-function compareInStep(file: ValueColumns, before: ValueColumns): ChangeSummary | null {
-  const count = file.plotNumbers.length;
-  if (count !== before.plotNumbers.length) return null;
-  const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
-  for (let at = 0; at < count; at += 1) {
-    if (file.plotNumbers[at] !== before.plotNumbers[at] || file.quadrats[at] !== before.quadrats[at]) return null;
-    const species = file.species[at];
-    const speciesBefore = before.species[at];
-    if (species !== speciesBefore && species.toLowerCase() !== speciesBefore.toLowerCase()) return null;
-    if (before.values[at] === file.values[at]) summary.unchanged += 1;
-    else summary.changed += 1;
-  }
-  return summary;
-}
-
-function compare(file: ValueColumns, current: CurrentValues | null): ChangeSummary {
-  const count = file.plotNumbers.length;
-  if (!current) return { added: count, changed: 0, unchanged: 0, removed: 0 };
-  const inStep = compareInStep(file, current.source);
-  if (inStep) return inStep;
-  current.index ??= indexValues(current.source);
-  const existing = current.index;
-  const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
-  let lastSpecies: string | null = null;
-  let bySlot: Map<number, number> | undefined;
-  for (let at = 0; at < count; at += 1) {
-    if (file.species[at] !== lastSpecies) {
-      lastSpecies = file.species[at];
-      bySlot = existing.get(lastSpecies.toLowerCase());
-    }
-    const before = bySlot?.get(file.plotNumbers[at] * 64 + file.quadrats[at]);
-    if (before === undefined) summary.added += 1;
-    else if (before === file.values[at]) summary.unchanged += 1;
-    else summary.changed += 1;
-  }
-  // Keys are unique on both sides, so whatever was not met again is removed.
-  let existingCount = 0;
-  for (const values of existing.values()) existingCount += values.size;
-  summary.removed = existingCount - summary.changed - summary.unchanged;
-  return summary;
-}
-
 /** Reads the stored file back, checks every row, and keeps the problems with the upload. */
 export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
   db();
@@ -242,7 +143,7 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
     errors,
     warnings: result.problems.length - errors,
     preview: recordsOf(result.values, 0, PREVIEW_ROWS),
-    changes: compare(result.values, await current),
+    changes: summarizeChanges(result.values, await current),
   };
 }
 
@@ -291,6 +192,6 @@ async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvR
   });
   recentlyChecked.delete(upload.id);
   // An upload replaces every plot: the values now in place are exactly the file's rows.
-  remember(upload.assessmentId, { versionId: version.id, source: result.values });
+  rememberCurrentValues(upload.assessmentId, { versionId: version.id, source: result.values });
   return version;
 }
