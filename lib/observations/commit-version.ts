@@ -49,9 +49,12 @@ async function lockAssessment(sequelize: Sequelize, request: CommitRequest, tran
  * so the number cannot be taken meanwhile) and gives its number. Its trigger opens the sets.
  */
 async function insertVersion(sequelize: Sequelize, versionId: string, request: CommitRequest, valueCount: number, reason: string | null, transaction: Transaction): Promise<number> {
-  const scope = request.replacePlotNumbers
-    ? "(SELECT array_agg(id) FROM plots WHERE trial_id = :trialId AND number = ANY (ARRAY[:plotNumbers]::int[]))"
-    : "NULL";
+  // NULL: the whole assessment; a list (even an empty one): those plots only.
+  const scope = !request.replacePlotNumbers
+    ? "NULL"
+    : request.replacePlotNumbers.length === 0
+      ? "'{}'::uuid[]"
+      : "(SELECT COALESCE(array_agg(id), '{}') FROM plots WHERE trial_id = :trialId AND number IN (:plotNumbers))";
   const [{ number }] = await sequelize.query<{ number: number }>(
     `INSERT INTO dataset_versions (id, assessment_id, trial_id, number, source, upload_id, created_by_id, reason, rows_added, rows_replaced, scope_plot_ids, created_at)
      SELECT :versionId, :assessmentId, :trialId, COALESCE(MAX(number), 0) + 1, :source, :uploadId, :userId, :reason, :rowsAdded, 0, ${scope}, now()

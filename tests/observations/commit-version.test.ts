@@ -86,6 +86,19 @@ describe("committing a version of an assessment's data", () => {
     ]);
   });
 
+  it("replaces only the plots it names: an entry naming none leaves every value in place", async () => {
+    const fixture = await createTrialFixture();
+    const request = { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, userId: fixture.owner.id };
+    await commitVersion(testDatabase(), { ...request, source: "upload", values: valuesFor(fixture, () => 5) });
+    const before = await currentValues(fixture.assessment.id);
+    const none = await commitVersion(testDatabase(), { ...request, source: "manual", replacePlotNumbers: [], values: [] });
+    expect(none).toMatchObject({ number: 2, rowsAdded: 0, rowsReplaced: 0 });
+    expect(await currentValues(fixture.assessment.id)).toEqual(before);
+    const one = await commitVersion(testDatabase(), { ...request, source: "manual", replacePlotNumbers: [101], values: [{ plotNumber: 101, quadrat: 1, species: "", value: 9 }] });
+    expect(one).toMatchObject({ number: 3, rowsAdded: 1, rowsReplaced: 2 });
+    expect(await currentValues(fixture.assessment.id)).toHaveLength(before.length - 1);
+  });
+
   it("gives back each value's species as written, in the order the values came, through each plot's list of names", async () => {
     const fixture = await createTrialFixture();
     const [first, second] = fixture.plots;
