@@ -23,8 +23,11 @@ export interface CommitRequest {
   /** A few values as objects, or a file's many as columns. */
   values: NewValue[] | ValueColumns;
   reason?: string;
-  /** A check made alongside the commit (the stored file is still the one read); if it fails, nothing is written. */
-  confirmed?: Promise<void>;
+  /**
+   * A check run alongside the commit once it holds the assessment's row (say, that the stored
+   * file is still the one read); if it fails, the commit rolls back before writing its values.
+   */
+  confirm?: () => Promise<void>;
 }
 
 export interface CommittedVersion {
@@ -107,8 +110,8 @@ interface VersionFacts {
 
 /**
  * A new version's bookkeeping, in its transaction: the upload it came from is marked, the
- * values it replaced (the earlier sets its insert closed) are counted, the change is audited
- * and its notices are queued.
+ * values it replaced (the earlier sets its insert closed) are counted, and its notices are
+ * queued.
  */
 async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transaction: Transaction): Promise<{ next: number; rowsReplaced: number }> {
   const { request, versionId, next, valueCount, status, reason } = facts;
@@ -131,6 +134,17 @@ async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transact
     { replacements: { versionId }, type: QueryTypes.SELECT, transaction },
   );
 
+  // Queued with the data, so a crash after the commit cannot lose them: the owner hears of a
+  // new upload, and the reviewers of any change made after their sign-off, with its reason.
+  const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
+  if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
+  if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
+  return { next, rowsReplaced };
+}
+
+/** The audit entry of a new version, written last, after its values. */
+async function auditVersion(facts: VersionFacts, rowsReplaced: number, transaction: Transaction): Promise<void> {
+  const { request, next, valueCount, status, reason } = facts;
   const where = request.replacePlotNumbers ? `plot${request.replacePlotNumbers.length === 1 ? "" : "s"} ${request.replacePlotNumbers.join(", ")}` : "the whole assessment";
   await AuditEvent.create(
     {
@@ -148,12 +162,6 @@ async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transact
     },
     { transaction },
   );
-  // Queued with the data, so a crash after the commit cannot lose them: the owner hears of a
-  // new upload, and the reviewers of any change made after their sign-off, with its reason.
-  const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
-  if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
-  if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
-  return { next, rowsReplaced };
 }
 
 /**
@@ -183,10 +191,13 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       type: QueryTypes.SELECT,
       transaction,
     });
-    const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then((next) =>
-      recordVersion(sequelize, { request, versionId, next, valueCount, status, reason }, transaction),
-    );
+    const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then(async (next) => {
+      const facts: VersionFacts = { request, versionId, next, valueCount, status, reason };
+      return { facts, ...(await recordVersion(sequelize, facts, transaction)) };
+    });
     recorded.catch(() => {});
+    const confirmed = request.confirm?.();
+    confirmed?.catch(() => {});
     let payload: Buffer[] | null;
     try {
       const plots = await plotsRead;
@@ -201,10 +212,11 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       await recorded.catch(() => {});
       throw error;
     }
-    const { next, rowsReplaced } = await recorded;
+    const { facts, next, rowsReplaced } = await recorded;
+    // Ran alongside everything above; a refusal rolls it back before the values go out.
+    await confirmed;
     if (payload) await copyValues(clientOf(transaction), payload);
-    // Awaited last, so it runs alongside everything above; a refusal rolls all of it back.
-    if (request.confirmed) await request.confirmed;
+    await auditVersion(facts, rowsReplaced, transaction);
     return { id: versionId, number: next, rowsAdded: valueCount, rowsReplaced };
   });
 }

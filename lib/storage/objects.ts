@@ -5,6 +5,7 @@ import { AppError } from "@/lib/errors";
 import { bucket, s3 } from "./s3";
 
 const PRESIGN_SECONDS = 15 * 60;
+const HEAD_TIMEOUT_MS = 5_000;
 
 function unavailable(): AppError {
   return new AppError("UNAVAILABLE", "File storage is not answering. Nothing was recorded; try again in a minute.");
@@ -38,7 +39,8 @@ function isMissingObject(error: unknown): boolean {
 /** Size and entity tag of a stored object; the tag changes whenever the object is replaced. */
 export async function objectInfo(key: string): Promise<{ size: number; etag: string } | null> {
   try {
-    const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
+    // Bounded: a commit waits on this while it holds its assessment's row.
+    const head = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }), { abortSignal: AbortSignal.timeout(HEAD_TIMEOUT_MS) });
     return { size: head.ContentLength ?? 0, etag: head.ETag ?? "" };
   } catch (error) {
     if (isMissingObject(error)) return null;

@@ -4,7 +4,7 @@ import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import { AppError, notFound } from "@/lib/errors";
 import { readCsv } from "@/lib/ingest/read-csv";
-import { recordsOf, type IngestProblem, type IngestRecord } from "@/lib/ingest/types";
+import { recordsOf, type IngestContext, type IngestProblem, type IngestRecord } from "@/lib/ingest/types";
 import { commitVersion, type CommittedVersion } from "@/lib/observations/commit-version";
 import { objectInfo, openObject, presignUpload } from "@/lib/storage/objects";
 import type { ReadCsvResult } from "@/lib/ingest/read-csv";
@@ -78,29 +78,24 @@ async function loadUpload(uploadId: string): Promise<Upload> {
 /**
  * The last few checked files, by upload: a commit on the same server right after its check
  * reuses the parse instead of reading the file again, when storage still holds the very
- * same object (same entity tag) and the plots have not changed.
+ * same object (same entity tag) and the file would be checked against the same assessment
+ * settings and plots.
  */
-const recentlyChecked = new Map<string, { etag: string; plotsDigest: string; result: ReadCsvResult }>();
+const recentlyChecked = new Map<string, { etag: string; contextDigest: string; result: ReadCsvResult }>();
 const RECENT_LIMIT = 4;
 
-/** The plots a file is checked against, numbers with treatment codes, as one digest; made alike here and in the database. */
-const plotsDigest = (plots: readonly { number: number; treatmentCode: string }[]) =>
-  createHash("md5").update(plots.map((plot) => `${plot.number}:${plot.treatmentCode}`).join(",")).digest("hex");
+/** Everything a file is checked against (plots with their treatments, quadrats, unit, range) as one digest. */
+const contextDigest = (context: IngestContext) => createHash("sha256").update(JSON.stringify(context)).digest("hex");
 
-async function plotsDigestOf(trialId: string): Promise<string> {
-  const [{ digest }] = await db().query<{ digest: string }>(
-    `SELECT md5(COALESCE(string_agg(p.number || ':' || t.code, ',' ORDER BY p.number), '')) AS digest
-       FROM plots p JOIN treatments t ON t.id = p.treatment_id WHERE p.trial_id = :trialId`,
-    { replacements: { trialId }, type: QueryTypes.SELECT },
-  );
-  return digest;
-}
-
-/** Whether storage still holds the very object a remembered parse was made from, checked against the same plots. */
-async function stillAsChecked(upload: Upload, cached: { etag: string; plotsDigest: string }): Promise<boolean> {
-  const [info, digest] = await Promise.all([objectInfo(upload.objectKey), plotsDigestOf(upload.trialId)]);
+/**
+ * Whether storage still holds the very object a remembered parse was made from, and the
+ * assessment still asks what it asked then. Run once the commit holds the assessment's row,
+ * so no change to its settings can land between this reading and the commit.
+ */
+async function stillAsChecked(upload: Upload, cached: { etag: string; contextDigest: string }): Promise<boolean> {
+  const [info, context] = await Promise.all([objectInfo(upload.objectKey), ingestContextFor(upload.trialId, upload.assessmentId)]);
   if (info === null) throw new AppError("CONFLICT", "The file has not arrived in storage. Upload it again.");
-  return Boolean(info.etag) && info.etag === cached.etag && digest === cached.plotsDigest;
+  return Boolean(info.etag) && info.etag === cached.etag && contextDigest(context) === cached.contextDigest;
 }
 
 async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
@@ -117,7 +112,7 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   const context = await contextRead;
   const result = await readCsv(stored.body, context);
   recentlyChecked.delete(upload.id);
-  recentlyChecked.set(upload.id, { etag: stored.etag, plotsDigest: plotsDigest(context.plots), result });
+  recentlyChecked.set(upload.id, { etag: stored.etag, contextDigest: contextDigest(context), result });
   while (recentlyChecked.size > RECENT_LIMIT) recentlyChecked.delete(recentlyChecked.keys().next().value!);
   return result;
 }
@@ -147,37 +142,36 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
   };
 }
 
-/** The remembered parse turned out not to match what storage holds now. */
+/** The remembered parse turned out not to match what storage holds, or what the assessment asks, now. */
 class StoredFileChanged extends Error {}
 
 /**
  * Commits a checked file as the assessment's next version; the file must not have changed.
- * A parse remembered from the check is committed while storage confirms, in parallel, that
- * it still holds that very object (a confirmation that fails rolls the commit back); without
- * one, or if the object changed, the file is read and checked again.
+ * A parse remembered from the check (of this very file: same checksum) is committed while
+ * storage and the assessment are confirmed unchanged alongside; a failed confirmation rolls
+ * the commit back before its values are written, and the file is read and checked again.
  */
 export async function commitUpload(user: SessionUser, uploadId: string, reason?: string): Promise<CommittedVersion> {
   db();
   const upload = await loadUpload(uploadId);
   if (upload.status !== "checked") throw new AppError("CONFLICT", "Check the file and fix its errors before committing it.");
   const cached = recentlyChecked.get(upload.id);
-  if (cached) {
-    const confirmed = stillAsChecked(upload, cached).then((same) => {
-      if (!same) throw new StoredFileChanged();
-    });
-    // Awaited inside the commit; a commit refused for another reason first leaves it unawaited.
-    confirmed.catch(() => {});
+  // Another server may have checked a newer file under the same upload since.
+  if (cached && cached.result.sha256 === upload.sha256) {
+    const confirm = async () => {
+      if (!(await stillAsChecked(upload, cached))) throw new StoredFileChanged();
+    };
     try {
-      return await commitChecked(user, upload, cached.result, reason, confirmed);
+      return await commitChecked(user, upload, cached.result, reason, confirm);
     } catch (error) {
       if (!(error instanceof StoredFileChanged)) throw error;
-      recentlyChecked.delete(upload.id);
     }
   }
+  recentlyChecked.delete(upload.id);
   return commitChecked(user, upload, await readStoredFile(upload), reason);
 }
 
-async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvResult, reason: string | undefined, confirmed?: Promise<void>): Promise<CommittedVersion> {
+async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvResult, reason: string | undefined, confirm?: () => Promise<void>): Promise<CommittedVersion> {
   if (result.sha256 !== upload.sha256) throw new AppError("CONFLICT", "The stored file changed after it was checked. Check it again.");
   if (result.problems.some((problem) => problem.severity === "error")) throw new AppError("CONFLICT", "The file has errors; fix them and upload it again.");
   const version = await commitVersion(db(), {
@@ -188,7 +182,7 @@ async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvR
     uploadId: upload.id,
     values: result.values,
     reason,
-    confirmed,
+    confirm,
   });
   recentlyChecked.delete(upload.id);
   // An upload replaces every plot: the values now in place are exactly the file's rows.

@@ -46,7 +46,7 @@ describe("when PostgreSQL goes away", () => {
     const uploadId = await sendAndCheck();
     expect((await technician.request(`/api/uploads/${uploadId}/check`, { method: "POST" })).status).toBe(200);
 
-    // The commit gets as far as its audit entry, with the version and its observation sets written, then loses the database.
+    // The commit gets as far as its audit entry, with the version and its values written, then loses the database.
     const hold = await holdTable("audit_events");
     const answer = technician.request(`/api/uploads/${uploadId}/commit`, { method: "POST", json: {} });
     try {
