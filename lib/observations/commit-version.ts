@@ -113,8 +113,8 @@ interface VersionFacts {
  * values it replaced (the earlier sets its insert closed) are counted, and its notices are
  * queued.
  */
-async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transaction: Transaction): Promise<{ next: number; rowsReplaced: number }> {
-  const { request, versionId, next, valueCount, status, reason } = facts;
+async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transaction: Transaction): Promise<number> {
+  const { request, versionId, next, status, reason } = facts;
   if (request.uploadId) {
     // Inside the same transaction, so a file can never become two versions.
     const [, marked] = (await sequelize.query(
@@ -139,7 +139,7 @@ async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transact
   const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
   if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
   if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
-  return { next, rowsReplaced };
+  return rowsReplaced;
 }
 
 /** The audit entry of a new version, written last, after its values. */
@@ -193,7 +193,7 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     });
     const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then(async (next) => {
       const facts: VersionFacts = { request, versionId, next, valueCount, status, reason };
-      return { facts, ...(await recordVersion(sequelize, facts, transaction)) };
+      return { facts, rowsReplaced: await recordVersion(sequelize, facts, transaction) };
     });
     recorded.catch(() => {});
     const confirmed = request.confirm?.();
@@ -212,11 +212,11 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       await recorded.catch(() => {});
       throw error;
     }
-    const { facts, next, rowsReplaced } = await recorded;
+    const { facts, rowsReplaced } = await recorded;
     // Ran alongside everything above; a refusal rolls it back before the values go out.
     await confirmed;
     if (payload) await copyValues(clientOf(transaction), payload);
     await auditVersion(facts, rowsReplaced, transaction);
-    return { id: versionId, number: next, rowsAdded: valueCount, rowsReplaced };
+    return { id: versionId, number: facts.next, rowsAdded: valueCount, rowsReplaced };
   });
 }

@@ -18,6 +18,7 @@ const uuidBytes = (uuid: string) => Buffer.from(uuid.replace(/-/g, ""), "hex");
 interface EncodedPlot {
   plotId: Buffer;
   names: Buffer[];
+  nameBytes: number;
   size: number;
 }
 
@@ -33,7 +34,7 @@ function measure(plot: PlotValues, plotId: Buffer, encodedNames: Map<string, Buf
   for (const bytes of names) nameBytes += bytes.length;
   const size =
     2 + (4 + 16) * 2 + (4 + ARRAY_HEAD + count * 8) + (4 + ARRAY_HEAD + names.length * 4 + nameBytes) + (4 + ARRAY_HEAD + count * 8) + (4 + ARRAY_HEAD + count * 12);
-  return { plotId, names, size };
+  return { plotId, names, nameBytes, size };
 }
 
 /**
@@ -68,9 +69,7 @@ function writeRow(target: Buffer, view: DataView, start: number, versionId: Buff
     }
   };
   writeIntegers(plot.quadrats);
-  let nameBytes = 0;
-  for (const bytes of encoded.names) nameBytes += bytes.length;
-  arrayStart(encoded.names.length, encoded.names.length * 4 + nameBytes, TEXT_OID);
+  arrayStart(encoded.names.length, encoded.names.length * 4 + encoded.nameBytes, TEXT_OID);
   for (const bytes of encoded.names) {
     view.setInt32(at, bytes.length);
     at += 4 + bytes.copy(target, at + 4);

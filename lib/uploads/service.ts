@@ -1,6 +1,5 @@
 import "server-only";
 import { createHash, randomUUID } from "node:crypto";
-import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import { AppError, notFound } from "@/lib/errors";
 import { readCsv } from "@/lib/ingest/read-csv";
