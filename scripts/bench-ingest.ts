@@ -15,9 +15,12 @@ if (!APP_HEAP_FLAGS.every((flag) => process.execArgv.includes(flag))) {
 }
 
 process.env.HOEBENCH_TEST_SLOT = process.env.HOEBENCH_TEST_SLOT ?? "8";
-/** Timed runs of each side, after one untimed run each: app servers and PostgreSQL run warm. */
+/**
+ * Timed runs of each side, after three untimed runs each: a serving app has checked files
+ * before (its code compiled, its file-checking thread started) and PostgreSQL runs warm.
+ */
 const RUNS = 5;
-const WARM_UP = 1;
+const WARM_UP = 3;
 const BLOCKS = 20;
 const TREATMENTS = 25;
 const QUADRATS = 50;

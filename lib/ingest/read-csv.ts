@@ -1,14 +1,32 @@
 import { createHash } from "node:crypto";
-import { Readable } from "node:stream";
-import Papa from "papaparse";
+import { claimCheckThread, type PartJob } from "./check-thread";
+import { checkPart } from "./check-part";
+import type { PartOutcome, PartRequest } from "./checked-part";
+import { ChunkQueue } from "./chunk-queue";
+import { LineScan } from "./line-scan";
+import { decodeUtf8, parseRows } from "./parse-rows";
 import { RowChecker } from "./row-checker";
 import { sniffFile } from "./sniff";
-import { defaultIngestLimits, type IngestContext, type IngestLimits, type IngestProblem, type IngestResult } from "./types";
+import { defaultIngestLimits, noValues, type IngestContext, type IngestLimits, type IngestProblem, type IngestResult } from "./types";
 
 export interface ReadCsvResult extends IngestResult {
   sizeBytes: number;
   sha256: string;
 }
+
+export interface ReadCsvOptions {
+  /**
+   * The file's size, when storage tells it before the bytes arrive: a file of at least
+   * `splitFromBytes` is checked in two parts at once, the later part on a second thread.
+   */
+  expectedBytes?: number;
+  splitFromBytes?: number;
+  /** Where a later part goes: the second thread unless a test says otherwise. */
+  claimPartChecker?: (request: PartRequest) => PartJob | null;
+}
+
+/** Below this a second thread saves less than handing it the bytes costs. */
+export const SPLIT_FROM_BYTES = 256 * 1024;
 
 const delimiterNames: Record<string, string> = { ";": "semicolons (;)", "\t": "tabs", "|": "vertical bars (|)" };
 
@@ -28,102 +46,141 @@ function wrongDelimiter(firstLine: string): IngestProblem | null {
 }
 
 /**
+ * The first part's text, with the whole-file checks the first text allows (the delimiter).
+ * Between pieces the event loop turns, so the bytes still arriving are read meanwhile (and
+ * the later part reaches its thread) instead of waiting for the parse of all queued pieces.
+ */
+async function* firstPartText(bytes: AsyncIterable<Uint8Array>, fatal: IngestProblem[]): AsyncGenerator<string> {
+  let first = true;
+  for await (const text of decodeUtf8(bytes, fatal)) {
+    await new Promise((resolve) => setImmediate(resolve));
+    if (first) {
+      first = false;
+      const problem = wrongDelimiter(text.replace(/^\ufeff/, "").split(/\r?\n/)[0]);
+      if (problem) {
+        fatal.push(problem);
+        return;
+      }
+    }
+    yield text;
+  }
+}
+
+async function* replay(chunks: Uint8Array[]): AsyncGenerator<Uint8Array> {
+  yield* chunks;
+}
+
+/**
  * Streams a data file through checks without holding it twice in memory: byte limit, file
  * type, UTF-8, delimiter, column and row limits, then every row through RowChecker.
  * Whole-file problems stop the reading early with a single clear message.
+ *
+ * A large file whose first half has no quoted cells is cut at the line break after its middle:
+ * its later part is checked on a second thread while this one checks the first, and the two
+ * checks are joined as if one pass had read every line (RowChecker.absorb).
  */
-export async function readCsv(source: AsyncIterable<Uint8Array>, context: IngestContext, limits: IngestLimits = defaultIngestLimits): Promise<ReadCsvResult> {
+export async function readCsv(
+  source: AsyncIterable<Uint8Array>,
+  context: IngestContext,
+  limits: IngestLimits = defaultIngestLimits,
+  options: ReadCsvOptions = {},
+): Promise<ReadCsvResult> {
   const hash = createHash("sha256");
-  const decoder = new TextDecoder("utf-8", { fatal: true });
   const checker = new RowChecker(context);
   const fatal: IngestProblem[] = [];
+  const firstPart = new ChunkQueue<Uint8Array>();
+  const { expectedBytes = 0, splitFromBytes = SPLIT_FROM_BYTES, claimPartChecker = claimCheckThread } = options;
+  const cutFrom = expectedBytes >= splitFromBytes ? Math.floor(expectedBytes / 2) : Infinity;
   let sizeBytes = 0;
-  let rowNumber = 0;
+  let stopped = false;
 
-  // Bytes become text here, with every whole-file check on the way; papaparse reads the text.
-  async function* text(): AsyncGenerator<string> {
+  // The later part: its request, the thread checking it, and its bytes (kept in case the
+  // thread fails, when this thread checks them itself).
+  let later = null as { request: PartRequest; job: PartJob; chunks: Uint8Array[] } | null;
+
+  // Bytes are read as fast as they arrive, not as fast as the first part is parsed, so the
+  // later part reaches the second thread early.
+  async function readBytes(): Promise<void> {
+    const scan = new LineScan();
+    let cutting = Number.isFinite(cutFrom);
     let sniffed = false;
-    let firstText = true;
+    let header = new Uint8Array();
+    let offset = 0;
     for await (const chunk of source) {
+      if (stopped) break;
       sizeBytes += chunk.byteLength;
       if (sizeBytes > limits.maxBytes) {
         fatal.push({ severity: "error", code: "too-large", message: `The file is larger than ${Math.round(limits.maxBytes / 1024 / 1024)} MB, the most one upload may be.` });
-        return;
+        break;
       }
       if (!sniffed) {
         sniffed = true;
         const problem = sniffFile(chunk);
         if (problem) {
           fatal.push(problem);
-          return;
+          break;
         }
+        const headerEnd = chunk.indexOf(10);
+        // A header longer than the first piece: too odd a file to cut.
+        if (headerEnd === -1) cutting = false;
+        else header = new Uint8Array(chunk.subarray(0, headerEnd + 1));
       }
       hash.update(chunk);
-      let decoded: string;
-      try {
-        decoded = decoder.decode(chunk, { stream: true });
-      } catch {
-        fatal.push({
-          severity: "error",
-          code: "encoding",
-          message: 'The file is not UTF-8 text (it may be saved in an older Windows or Mac encoding). Save it as "CSV UTF-8 (comma-separated)" and upload it again.',
-        });
-        return;
+      if (later) {
+        later.chunks.push(chunk);
+        later.job.send(chunk);
+        continue;
       }
-      if (firstText && decoded.length > 0) {
-        firstText = false;
-        const problem = wrongDelimiter(decoded.replace(/^\ufeff/, "").split(/\r?\n/)[0]);
-        if (problem) {
-          fatal.push(problem);
-          return;
+      let firstBytes = chunk;
+      if (cutting) {
+        const cut = offset + chunk.length > cutFrom ? chunk.indexOf(10, Math.max(0, cutFrom - offset)) : -1;
+        if (cut !== -1) firstBytes = chunk.subarray(0, cut + 1);
+        scan.take(firstBytes);
+        const newline = cut !== -1 ? scan.newline() : null;
+        const request: PartRequest | null = newline ? { context, limits, header, firstRow: scan.lines + 1, newline } : null;
+        const job = request ? claimPartChecker(request) : null;
+        if (request && job) {
+          later = { request, job, chunks: [] };
+          const rest = chunk.subarray(cut + 1);
+          if (rest.length > 0) {
+            later.chunks.push(rest);
+            job.send(rest);
+          }
+        } else if (cut !== -1) {
+          // Not cut after all: this thread reads the whole file.
+          cutting = false;
+          firstBytes = chunk;
         }
       }
-      if (fatal.length) return;
-      if (decoded) yield decoded;
+      offset += chunk.length;
+      firstPart.push(firstBytes);
     }
-    if (!sniffed) {
-      fatal.push(sniffFile(new Uint8Array())!);
-      return;
-    }
-    try {
-      const tail = decoder.decode();
-      if (tail) yield tail;
-    } catch {
-      fatal.push({ severity: "error", code: "encoding", message: "The file ends in the middle of a character; it is not complete UTF-8 text. Export it again." });
-    }
+    if (!sniffed && !fatal.length) fatal.push(sniffFile(new Uint8Array())!);
+    firstPart.end();
+    later?.job.end();
   }
 
-  await new Promise<void>((resolve, reject) => {
-    // A Node stream is papaparse's fast path (its NODE_STREAM_INPUT duplex is ~50× slower);
-    // chunk() hands over each piece's rows at once instead of one result object per row.
-    Papa.parse(Readable.from(text(), { objectMode: false }) as unknown as File, {
-      delimiter: ",",
-      skipEmptyLines: false,
-      chunk: (results: Papa.ParseResult<string[]>, parser: Papa.Parser) => {
-        for (const cells of results.data) {
-          if (fatal.length) {
-            parser.abort();
-            return;
-          }
-          rowNumber += 1;
-          if (rowNumber === 1 && cells.length > limits.maxColumns) {
-            fatal.push({ severity: "error", code: "too-many-columns", row: 1, message: `The header has ${cells.length} columns; a data file has at most ${limits.maxColumns}. Use the data sheet template.` });
-            parser.abort();
-            return;
-          }
-          if (rowNumber - 1 > limits.maxRows) {
-            fatal.push({ severity: "error", code: "too-many-rows", message: `The file has more than ${limits.maxRows.toLocaleString("en-US")} rows, the most one upload may hold. Split it by assessment date.` });
-            parser.abort();
-            return;
-          }
-          checker.accept(cells, rowNumber);
-        }
-      },
-      complete: () => resolve(),
-      error: (error: Error) => reject(error),
-    });
+  const reading = readBytes().catch((error: Error) => {
+    firstPart.fail(error);
+    throw error;
   });
+  reading.catch(() => {});
+  let outcome: PartOutcome | null = null;
+  try {
+    await parseRows(firstPartText(firstPart, fatal), checker, { limits, fatal });
+    if (fatal.length) stopped = true;
+    await reading;
+    if (later && !fatal.length) {
+      const { request, job, chunks } = later;
+      outcome = await job.outcome.catch(() => checkPart(request, replay(chunks)));
+    }
+  } finally {
+    // Refused on the first part, or failed: the second thread is let go for the next file.
+    if (later && outcome === null) later.job.drop();
+  }
+  if (outcome && "fatal" in outcome) fatal.push(outcome.fatal);
 
-  if (fatal.length) return { format: null, values: { rows: [], plotNumbers: [], quadrats: [], species: [], values: [] }, problems: fatal, rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
+  if (fatal.length) return { format: null, values: noValues(), problems: fatal, rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
+  if (outcome && "part" in outcome) checker.absorb(outcome.part);
   return { ...checker.finish(), sizeBytes, sha256: hash.digest("hex") };
 }

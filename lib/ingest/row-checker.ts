@@ -1,5 +1,7 @@
 import { readHeader, sameUnit, type ColumnMap } from "./header";
-import type { IngestContext, IngestProblem, IngestResult, IngestValues } from "./types";
+import type { CheckedPart } from "./checked-part";
+import { floatColumn, intColumn } from "./column-builder";
+import type { IngestContext, IngestProblem, IngestResult } from "./types";
 import { readNumberCell, readWholeNumber } from "./values";
 
 const MAX_PROBLEMS_SHOWN = 500;
@@ -11,6 +13,22 @@ function describePlots(numbers: number[]): string {
 }
 
 const describeCell = (plotNumber: number, quadrat: number, species: string) => `plot ${plotNumber}, quadrat ${quadrat}${species ? `, ${species}` : ""}`;
+
+const duplicateProblem = (row: number, column: string, cell: string, earlier: number): IngestProblem => ({
+  severity: "error",
+  code: "duplicate",
+  row,
+  column,
+  message: `Row ${row}: ${cell} already has a value in row ${earlier}. Keep one of them.`,
+});
+
+export interface RowCheckerOptions {
+  /**
+   * Whether the header's own problems are reported: not by the checker of a file's later part,
+   * which gets the header only to know the columns (the first part's checker reports them).
+   */
+  reportHeader?: boolean;
+}
 
 function isBlank(cells: string[]): boolean {
   for (const cell of cells) if (cell !== "" && cell.trim() !== "") return false;
@@ -41,18 +59,33 @@ export class RowChecker {
   private readonly quadratsWithValues: Uint8Array;
   private readonly speciesNumbers = new Map<string, number>();
   /**
-   * Each spelling met so far, with its species number and one shared copy of the name: the
-   * values keep that copy, so a 100,000-row file holds a few names instead of a string per row
-   * (which would outlive the row and be copied by the collector).
+   * Each spelling met so far, with its species number (spellings that differ only in case are
+   * one species) and its place in spellingNames, which the values refer to.
    */
-  private readonly spellings = new Map<string, { number: number; name: string }>();
-  private readonly values: IngestValues = { rows: [], plotNumbers: [], quadrats: [], species: [], values: [] };
+  private readonly spellings = new Map<string, { number: number; name: string; spelling: number }>();
+  private readonly spellingNames: string[] = [];
+  /** The values taken, as columns: the file's line, the plot (number and place in context.plots), quadrat, spelling, value. */
+  private readonly rows = intColumn();
+  private readonly plotNumbers = intColumn();
+  private readonly valuePlotIndexes = intColumn();
+  private readonly quadrats = intColumn();
+  private readonly valueSpellings = intColumn();
+  private readonly values = floatColumn();
+  /** The duplicates listed, with the row they repeat (absorb may have to name an earlier one). */
+  private readonly duplicatesListed: { problem: number; cell: string; earlier: number }[] = [];
+  /** The values (by index) that drew a range warning. */
+  private readonly implausibleValues: number[] = [];
+  private readonly reportHeader: boolean;
   private readonly problems: IngestProblem[] = [];
   private problemCount = 0;
   private errors = 0;
   private rowsRead = 0;
 
-  constructor(private readonly context: IngestContext) {
+  constructor(
+    private readonly context: IngestContext,
+    options: RowCheckerOptions = {},
+  ) {
+    this.reportHeader = options.reportHeader ?? true;
     this.plotIndexes = new Map(context.plots.map((plot, index) => [plot.number, index]));
     this.stride = context.quadratsPerPlot + 1;
     this.quadratsWithValues = new Uint8Array(context.plots.length * this.stride);
@@ -74,7 +107,7 @@ export class RowChecker {
       this.headerSeen = true;
       this.headerWidth = cells.length;
       const { map, problems } = readHeader(cells, this.context.unit, this.context.quadratsPerPlot);
-      problems.forEach((problem) => this.report(problem));
+      if (this.reportHeader) problems.forEach((problem) => this.report(problem));
       this.map = map;
       return;
     }
@@ -164,12 +197,14 @@ export class RowChecker {
       return;
     }
     const slot = plotIndex * this.stride + quadrat;
-    const { number: speciesNumber, name: speciesName } = this.speciesOf(species);
+    const { number: speciesNumber, spelling } = this.speciesOf(species);
     const table = this.seen[speciesNumber];
     const overflowKey = speciesNumber * this.quadratsWithValues.length + slot;
     const earlier = table ? table[slot] : (this.seenOverflow.get(overflowKey) ?? 0);
     if (earlier !== 0) {
-      this.report({ severity: "error", code: "duplicate", row, column, message: `Row ${row}: ${describeCell(plotNumber, quadrat, species)} already has a value in row ${earlier}. Keep one of them.` });
+      const cell = describeCell(plotNumber, quadrat, species);
+      if (this.problems.length < MAX_PROBLEMS_SHOWN) this.duplicatesListed.push({ problem: this.problems.length, cell, earlier });
+      this.report(duplicateProblem(row, column, cell, earlier));
       return;
     }
     if (table) table[slot] = row;
@@ -177,6 +212,7 @@ export class RowChecker {
     this.quadratsWithValues[slot] = 1;
     const { plausibleMin, plausibleMax } = this.context;
     if ((plausibleMin !== null && reading.value < plausibleMin) || (plausibleMax !== null && reading.value > plausibleMax)) {
+      this.implausibleValues.push(this.rows.length);
       this.report({
         severity: "warning",
         code: "implausible",
@@ -185,15 +221,19 @@ export class RowChecker {
         message: `Row ${row}: ${reading.value} ${this.context.unit} for ${describeCell(plotNumber, quadrat, species)} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
       });
     }
-    const values = this.values;
-    values.rows.push(row);
-    values.plotNumbers.push(plotNumber);
-    values.quadrats.push(quadrat);
-    values.species.push(speciesName);
-    values.values.push(reading.value);
+    this.take(row, plotNumber, plotIndex, quadrat, spelling, reading.value);
   }
 
-  private speciesOf(written: string): { number: number; name: string } {
+  private take(row: number, plotNumber: number, plotIndex: number, quadrat: number, spelling: number, value: number): void {
+    this.rows.push(row);
+    this.plotNumbers.push(plotNumber);
+    this.valuePlotIndexes.push(plotIndex);
+    this.quadrats.push(quadrat);
+    this.valueSpellings.push(spelling);
+    this.values.push(value);
+  }
+
+  private speciesOf(written: string): { number: number; name: string; spelling: number } {
     let spelling = this.spellings.get(written);
     if (spelling === undefined) {
       // Spellings that differ only in case are one species.
@@ -204,18 +244,131 @@ export class RowChecker {
         this.speciesNumbers.set(key, number);
         if (number < SPECIES_TABLES) this.seen.push(new Int32Array(this.quadratsWithValues.length));
       }
-      this.spellings.set(written, (spelling = { number, name: written }));
+      this.spellings.set(written, (spelling = { number, name: written, spelling: this.spellingNames.push(written) - 1 }));
     }
     return spelling;
+  }
+
+  /**
+   * This checker's rows as typed columns for another thread to absorb (see absorb): the part
+   * of a file after its first part, checked by this checker alone. Whole-file checks (lost
+   * plots, an empty file) are left to the checker that absorbs it.
+   */
+  exportPart(): CheckedPart {
+    return {
+      rows: this.rows.view(),
+      plotIndexes: this.valuePlotIndexes.view(),
+      quadrats: this.quadrats.view(),
+      speciesIndexes: this.valueSpellings.view(),
+      speciesNames: this.spellingNames,
+      values: this.values.view(),
+      implausibleValues: Int32Array.from(this.implausibleValues),
+      problems: this.problems,
+      duplicatesListed: this.duplicatesListed,
+      problemCount: this.problemCount,
+      errors: this.errors,
+      rowsRead: this.rowsRead,
+    };
+  }
+
+  /**
+   * absorb's loop, on its own so that it stays compiled: the values of the part that repeat none
+   * of this checker's are taken in; the others become duplicates (listed up to the limit).
+   */
+  private takeInPart(part: CheckedPart, format: ColumnMap["format"]) {
+    const spellings = part.speciesNames.map((name) => this.speciesOf(name));
+    const { rows, plotIndexes, quadrats, speciesIndexes, values, implausibleValues } = part;
+    const crossing: IngestProblem[] = [];
+    let crossingCount = 0;
+    /** Range warnings a duplicate takes the place of, by row and column. */
+    const dropped = new Set<string>();
+    /** This checker's row each of the part's values repeats, by the part's row and column. */
+    const repeated = new Map<string, number>();
+    // The values that drew a range warning, in increasing order: the next one to come.
+    let nextImplausible = 0;
+    const stride = this.stride;
+    const slots = this.quadratsWithValues.length;
+    const plots = this.context.plots;
+    for (let index = 0; index < rows.length; index += 1) {
+      const plotIndex = plotIndexes[index];
+      const quadrat = quadrats[index];
+      const slot = plotIndex * stride + quadrat;
+      const spelling = spellings[speciesIndexes[index]];
+      const table = this.seen[spelling.number];
+      const earlier = table ? table[slot] : (this.seenOverflow.get(spelling.number * slots + slot) ?? 0);
+      const row = rows[index];
+      // Bounds checked first: reading past a typed array's end is slow.
+      const implausible = nextImplausible < implausibleValues.length && implausibleValues[nextImplausible] === index;
+      if (implausible) nextImplausible += 1;
+      if (earlier !== 0) {
+        crossingCount += 1;
+        const column = format === "wide" ? `q${quadrat}` : "value";
+        const cell = describeCell(plots[plotIndex].number, quadrat, spelling.name);
+        if (crossing.length < MAX_PROBLEMS_SHOWN) crossing.push(duplicateProblem(row, column, cell, earlier));
+        // Read in one pass, the duplicate would have been reported instead of its range warning.
+        if (implausible) dropped.add(`${row}:${column}`);
+        repeated.set(`${row}:${column}`, earlier);
+        continue;
+      }
+      if (table) table[slot] = row;
+      else this.seenOverflow.set(spelling.number * slots + slot, row);
+      this.quadratsWithValues[slot] = 1;
+      if (implausible) this.implausibleValues.push(this.rows.length);
+      this.take(row, plots[plotIndex].number, plotIndex, quadrat, spelling.spelling, values[index]);
+    }
+    return { crossing, crossingCount, dropped, repeated };
+  }
+
+  /**
+   * Takes in the rows of the file's next part, checked elsewhere against the same context as
+   * if this checker had read them itself: a value already given in this checker's rows is the
+   * same duplicate error (and draws no range warning), problems stay in row order, and the
+   * first MAX_PROBLEMS_SHOWN of the whole file are the ones listed.
+   */
+  absorb(part: CheckedPart): void {
+    const map = this.map;
+    if (!map) return;
+    const shownBefore = this.problems.length;
+    const { crossing, crossingCount, dropped, repeated } = this.takeInPart(part, map.format);
+    const warningsDropped = dropped.size;
+    // A later copy of such a value repeats, read in one pass, this checker's row, not the part's.
+    const partListed = [...part.problems];
+    for (const { problem, cell, earlier } of part.duplicatesListed) {
+      const { row, column } = partListed[problem];
+      const first = repeated.get(`${earlier}:${column}`);
+      if (first !== undefined) partListed[problem] = duplicateProblem(row!, column!, cell, first);
+    }
+    const partProblems = dropped.size > 0 ? partListed.filter((problem) => !(problem.code === "implausible" && dropped.has(`${problem.row}:${problem.column}`))) : partListed;
+    this.rowsRead += part.rowsRead;
+    this.errors += part.errors + crossingCount;
+    this.problemCount += part.problemCount - warningsDropped + crossingCount;
+    // Both lists are in file order (row, then a wide row's quadrat columns) and each holds the
+    // first MAX_PROBLEMS_SHOWN of its kind (the part's, less any range warnings dropped above).
+    const columnOrder = new Map([...map.quadratColumns.values()].map((quadrat, order) => [`q${quadrat}`, order]));
+    const before = (a: IngestProblem, b: IngestProblem) => a.row! < b.row! || (a.row === b.row && (columnOrder.get(a.column ?? "") ?? 0) < (columnOrder.get(b.column ?? "") ?? 0));
+    let fromPart = 0;
+    let fromCrossing = 0;
+    for (let shown = shownBefore; shown < MAX_PROBLEMS_SHOWN; shown += 1) {
+      const next = partProblems[fromPart];
+      const crossed = crossing[fromCrossing];
+      if (!next && !crossed) break;
+      if (crossed && (!next || before(crossed, next))) {
+        this.problems.push(crossed);
+        fromCrossing += 1;
+      } else {
+        this.problems.push(next);
+        fromPart += 1;
+      }
+    }
   }
 
   finish(): IngestResult {
     if (!this.headerSeen) {
       this.report({ severity: "error", code: "empty-file", message: "The file is empty. Fill in the data sheet and upload it again." });
-    } else if (this.map && this.values.rows.length === 0 && this.errorCount === 0) {
+    } else if (this.map && this.rows.length === 0 && this.errorCount === 0) {
       this.report({ severity: "error", code: "no-values", message: "The file has a header but no values. Fill in the data sheet and upload it again." });
     }
-    if (this.map && this.values.rows.length > 0) {
+    if (this.map && this.rows.length > 0) {
       const missingPlots: number[] = [];
       const short: number[] = [];
       this.context.plots.forEach((plot, index) => {
@@ -242,6 +395,14 @@ export class RowChecker {
     if (this.problemCount > this.problems.length) {
       this.problems.push({ severity: "warning", code: "more-problems", message: `${this.problemCount - this.problems.length} further problems are not listed. Fix the ones above and upload again.` });
     }
-    return { format: this.map?.format ?? null, values: this.values, problems: this.problems, rowsRead: this.rowsRead };
+    const values = {
+      rows: this.rows.view(),
+      plotNumbers: this.plotNumbers.view(),
+      quadrats: this.quadrats.view(),
+      speciesIndexes: this.valueSpellings.view(),
+      speciesNames: this.spellingNames,
+      values: this.values.view(),
+    };
+    return { format: this.map?.format ?? null, values, problems: this.problems, rowsRead: this.rowsRead };
   }
 }

@@ -1,4 +1,4 @@
-import type { ValueColumns } from "@/lib/observations/value-columns";
+import { emptyColumns, speciesAt, type ValueColumns } from "@/lib/observations/value-columns";
 
 export type ProblemSeverity = "error" | "warning";
 
@@ -48,14 +48,16 @@ export interface IngestRecord {
 
 /** A file's values in columns, with the line each came from. */
 export interface IngestValues extends ValueColumns {
-  rows: number[];
+  rows: Int32Array;
 }
+
+export const noValues = (): IngestValues => ({ rows: new Int32Array(), ...emptyColumns() });
 
 /** Values start to end as one object each (the preview, tests). */
 export function recordsOf(values: IngestValues, start = 0, end = values.rows.length): IngestRecord[] {
   const records: IngestRecord[] = [];
   for (let index = start; index < Math.min(end, values.rows.length); index += 1) {
-    records.push({ row: values.rows[index], plotNumber: values.plotNumbers[index], quadrat: values.quadrats[index], species: values.species[index], value: values.values[index] });
+    records.push({ row: values.rows[index], plotNumber: values.plotNumbers[index], quadrat: values.quadrats[index], species: speciesAt(values, index), value: values.values[index] });
   }
   return records;
 }

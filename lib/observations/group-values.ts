@@ -25,17 +25,16 @@ const MAX_TABLE_SLOTS = 8_000_000;
  */
 export function groupValuesByPlot(columns: ValueColumns, plotNumbers: readonly number[]): PlotValues[] {
   const plotIndexes = new Map(plotNumbers.map((number, index) => [number, index]));
-  const { plotNumbers: plotOf, quadrats, species, values } = columns;
+  const { plotNumbers: plotOf, quadrats, speciesIndexes, speciesNames, values } = columns;
   const count = plotOf.length;
-  const speciesNumbers = new Map<string, number>();
   let highestQuadrat = 0;
   for (let index = 0; index < count; index += 1) {
     const quadrat = quadrats[index];
     if (!Number.isInteger(quadrat) || quadrat < 1 || quadrat > MAX_QUADRAT) throw new AppError("INVALID_INPUT", `Quadrat ${quadrat} is not a quadrat number.`);
     if (quadrat > highestQuadrat) highestQuadrat = quadrat;
-    if (!speciesNumbers.has(species[index])) speciesNumbers.set(species[index], speciesNumbers.size);
   }
-  const slotsPerPlot = speciesNumbers.size * (highestQuadrat + 1);
+  // Species are told apart as written (each spelling is one name in the list).
+  const slotsPerPlot = speciesNames.length * (highestQuadrat + 1);
   const tableSize = slotsPerPlot * plotNumbers.length;
   // A 100,000-value file fills most slots of a small table: one byte each beats hashing keys.
   const table = tableSize <= MAX_TABLE_SLOTS ? new Uint8Array(tableSize) : null;
@@ -50,10 +49,10 @@ export function groupValuesByPlot(columns: ValueColumns, plotNumbers: readonly n
     const plotIndex = plotIndexes.get(plotNumber);
     if (plotIndex === undefined) throw new AppError("INVALID_INPUT", `Plot ${plotNumber} is not in this trial.`);
     const quadrat = quadrats[index];
-    const speciesNumber = speciesNumbers.get(species[index])!;
+    const speciesNumber = speciesIndexes[index];
     const slot = plotIndex * slotsPerPlot + speciesNumber * (highestQuadrat + 1) + quadrat;
     const seen = table ? table[slot] === 1 : keys!.has(slot);
-    if (seen) throw new AppError("INVALID_INPUT", `Plot ${plotNumber}, quadrat ${quadrat}${species[index] ? `, ${species[index]}` : ""} has more than one value.`);
+    if (seen) throw new AppError("INVALID_INPUT", `Plot ${plotNumber}, quadrat ${quadrat}${speciesNames[speciesNumber] ? `, ${speciesNames[speciesNumber]}` : ""} has more than one value.`);
     if (table) table[slot] = 1;
     else keys!.add(slot);
     let group = groups[plotIndex];
@@ -65,7 +64,7 @@ export function groupValuesByPlot(columns: ValueColumns, plotNumbers: readonly n
     }
     let listNumber = names.get(speciesNumber);
     if (listNumber === undefined) {
-      listNumber = group.speciesNames.push(species[index]);
+      listNumber = group.speciesNames.push(speciesNames[speciesNumber]);
       names.set(speciesNumber, listNumber);
     }
     group.quadrats.push(quadrat);

@@ -2,7 +2,7 @@ import "server-only";
 import { QueryTypes } from "sequelize";
 import { db } from "@/lib/db/sequelize";
 import { currentRawValues } from "@/lib/data/observations";
-import { columnsOf, type ValueColumns } from "@/lib/observations/value-columns";
+import { columnsOf, speciesAt, type ValueColumns } from "@/lib/observations/value-columns";
 
 /** What a checked file would change against the values in place, cell by cell. */
 export interface ChangeSummary {
@@ -40,11 +40,14 @@ export function rememberCurrentValues(assessmentId: string, values: CurrentValue
 
 function indexValues(values: ValueColumns): ValueIndex {
   const index: ValueIndex = new Map();
-  for (let at = 0; at < values.plotNumbers.length; at += 1) {
-    const species = values.species[at].toLowerCase();
+  const bySpelling = values.speciesNames.map((name) => {
+    const species = name.toLowerCase();
     let bySlot = index.get(species);
     if (!bySlot) index.set(species, (bySlot = new Map()));
-    bySlot.set(values.plotNumbers[at] * 64 + values.quadrats[at], values.values[at]);
+    return bySlot;
+  });
+  for (let at = 0; at < values.plotNumbers.length; at += 1) {
+    bySpelling[values.speciesIndexes[at]].set(values.plotNumbers[at] * 64 + values.quadrats[at], values.values[at]);
   }
   return index;
 }
@@ -70,8 +73,8 @@ function compareInStep(file: ValueColumns, before: ValueColumns): ChangeSummary 
   const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
   for (let at = 0; at < count; at += 1) {
     if (file.plotNumbers[at] !== before.plotNumbers[at] || file.quadrats[at] !== before.quadrats[at]) return null;
-    const species = file.species[at];
-    const speciesBefore = before.species[at];
+    const species = speciesAt(file, at);
+    const speciesBefore = speciesAt(before, at);
     if (species !== speciesBefore && species.toLowerCase() !== speciesBefore.toLowerCase()) return null;
     if (before.values[at] === file.values[at]) summary.unchanged += 1;
     else summary.changed += 1;
@@ -87,14 +90,9 @@ export function summarizeChanges(file: ValueColumns, current: CurrentValues | nu
   current.index ??= indexValues(current.source);
   const existing = current.index;
   const summary: ChangeSummary = { added: 0, changed: 0, unchanged: 0, removed: 0 };
-  let lastSpecies: string | null = null;
-  let bySlot: Map<number, number> | undefined;
+  const bySpelling = file.speciesNames.map((name) => existing.get(name.toLowerCase()));
   for (let at = 0; at < count; at += 1) {
-    if (file.species[at] !== lastSpecies) {
-      lastSpecies = file.species[at];
-      bySlot = existing.get(lastSpecies.toLowerCase());
-    }
-    const before = bySlot?.get(file.plotNumbers[at] * 64 + file.quadrats[at]);
+    const before = bySpelling[file.speciesIndexes[at]]?.get(file.plotNumbers[at] * 64 + file.quadrats[at]);
     if (before === undefined) summary.added += 1;
     else if (before === file.values[at]) summary.unchanged += 1;
     else summary.changed += 1;

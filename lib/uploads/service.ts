@@ -109,7 +109,7 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
     throw new AppError("INVALID_INPUT", "The stored file is not the size that was announced. Upload it again.");
   }
   const context = await contextRead;
-  const result = await readCsv(stored.body, context);
+  const result = await readCsv(stored.body, context, undefined, { expectedBytes: stored.size });
   recentlyChecked.delete(upload.id);
   recentlyChecked.set(upload.id, { etag: stored.etag, contextDigest: contextDigest(context), result });
   while (recentlyChecked.size > RECENT_LIMIT) recentlyChecked.delete(recentlyChecked.keys().next().value!);

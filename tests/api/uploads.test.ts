@@ -12,11 +12,11 @@ function goodFile(value = 3): string {
   return ["plot,quadrat,species,value", ...fixture.plots.flatMap((plot) => [1, 2].map((quadrat) => `${plot.number},${quadrat},,${value + quadrat}`))].join("\n");
 }
 
-async function upload(client: TestClient, content: string | Uint8Array, fileName = "density.csv") {
+async function upload(client: TestClient, content: string | Uint8Array, fileName = "density.csv", target: TrialFixture = fixture) {
   const bytes = typeof content === "string" ? new TextEncoder().encode(content) : content;
   const started = await client.request("/api/uploads", {
     method: "POST",
-    json: { trialId: fixture.trial.id, assessmentId: fixture.assessment.id, fileName, sizeBytes: bytes.byteLength },
+    json: { trialId: target.trial.id, assessmentId: target.assessment.id, fileName, sizeBytes: bytes.byteLength },
   });
   if (started.status !== 201) return { started, check: null as Response | null, body: await started.json() };
   const { uploadId, putUrl, contentType } = await started.json();
@@ -121,6 +121,41 @@ describe("uploading a data file", () => {
       expect(await DatasetVersion.count({ where: { assessmentId: fixture.assessment.id } })).toBe(before);
     });
   }
+
+  it("checks a large file on two threads with the same result, and commits every value", async () => {
+    const large = await createTrialFixture({ quadratsPerPlot: 40 });
+    const technicianUser = await User.findOne({ where: { email: "technician@hoebench.test" } });
+    await Membership.create({ trialId: large.trial.id, userId: technicianUser!.id, role: "technician" });
+    const species = Array.from({ length: 36 }, (_, index) => `weed ${index + 1}`);
+    const lines = ["plot,quadrat,species,value"];
+    for (const plot of large.plots) for (let quadrat = 1; quadrat <= 40; quadrat += 1) for (const name of species) lines.push(`${plot.number},${quadrat},${name},${(plot.number + quadrat) % 9}`);
+    // Two faults: one in each half of the file (a row moved to the end repeats one near the top).
+    const eleventh = lines[10];
+    lines[10] = eleventh.replace(/,\d+$/, ",lots");
+    lines.push(lines[2]);
+    const file = `${lines.join("\n")}\n`;
+    expect(Buffer.byteLength(file)).toBeGreaterThan(256 * 1024);
+    const { body } = await upload(technician, file, "large.csv", large);
+    expect(body).toMatchObject({ status: "refused", rowCount: lines.length - 1, errors: 2, warnings: 0 });
+    expect(body.problems.map((problem: { message: string }) => problem.message)).toEqual([
+      'Row 11: "lots" for plot 101, quadrat 1, weed 10 is not a number.',
+      `Row ${lines.length}: plot 101, quadrat 1, weed 2 already has a value in row 3. Keep one of them.`,
+    ]);
+    const health = await (await fetch(new URL("/api/health", technician.baseUrl))).json();
+    expect(health.fileCheckThread).toBe("running");
+
+    lines[10] = eleventh;
+    lines.pop();
+    const fixed = await upload(technician, `${lines.join("\n")}\n`, "large.csv", large);
+    expect(fixed.body).toMatchObject({ status: "checked", rowCount: large.plots.length * 40 * 36, errors: 0, warnings: 0 });
+    const commit = await technician.request(`/api/uploads/${fixed.uploadId}/commit`, { method: "POST", json: {} });
+    expect(await commit.json()).toMatchObject({ number: 1, rowsAdded: large.plots.length * 40 * 36 });
+    const [{ total }] = await testDatabase().query<{ total: number }>("SELECT sum(value)::int AS total FROM current_observations WHERE assessment_id = :assessmentId", {
+      replacements: { assessmentId: large.assessment.id },
+      type: QueryTypes.SELECT,
+    });
+    expect(total).toBe(large.plots.reduce((sum, plot) => sum + Array.from({ length: 40 }, (_, index) => (plot.number + index + 1) % 9).reduce((a, b) => a + b, 0) * 36, 0));
+  });
 
   it("refuses a file over the size limit before anything is stored", async () => {
     const response = await technician.request("/api/uploads", {

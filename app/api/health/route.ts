@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { publicRoute } from "@/lib/auth/guard";
 import { databaseReachable } from "@/lib/db/health";
+import { checkThreadState } from "@/lib/ingest/check-thread";
 import { jsonResponse } from "@/lib/http";
 import { mailReachable } from "@/lib/mail/transport";
 import { storageReachable } from "@/lib/storage/s3";
@@ -12,6 +13,8 @@ const healthSchema = z.object({
   database: z.enum(["ok", "down"]),
   objectStorage: z.enum(["ok", "down"]),
   mail: z.enum(["ok", "down"]),
+  /** This server process's second thread for large data files (not a dependency: one thread still checks them). */
+  fileCheckThread: z.enum(["idle", "running", "failed"]),
 });
 
 export const GET = publicRoute({ why: "load balancers and the start script probe it without a session" }, async () => {
@@ -20,7 +23,7 @@ export const GET = publicRoute({ why: "load balancers and the start script probe
   const allUp = database && objectStorage && mail;
   return jsonResponse(
     healthSchema,
-    { status: allUp ? "ok" : "degraded", database: state(database), objectStorage: state(objectStorage), mail: state(mail) },
+    { status: allUp ? "ok" : "degraded", database: state(database), objectStorage: state(objectStorage), mail: state(mail), fileCheckThread: checkThreadState() },
     allUp ? 200 : 503,
   );
 });
