@@ -49,20 +49,34 @@ async function lockAssessment(sequelize: Sequelize, request: CommitRequest, tran
 
 /**
  * Inserts the version numbered after the assessment's last one (the assessment row is locked,
- * so the number cannot be taken meanwhile) and gives its number. Its trigger opens the sets.
+ * so neither the number nor the values in place can change meanwhile), in one statement with
+ * its bookkeeping: the upload it came from is marked, and the values it replaces (those of the
+ * sets its insert trigger closes) are counted before they are closed.
  */
-async function insertVersion(sequelize: Sequelize, versionId: string, request: CommitRequest, valueCount: number, reason: string | null, transaction: Transaction): Promise<number> {
+async function insertVersion(sequelize: Sequelize, versionId: string, request: CommitRequest, valueCount: number, reason: string | null, transaction: Transaction) {
   // NULL: the whole assessment; a list (even an empty one): those plots only.
   const scope = !request.replacePlotNumbers
-    ? "NULL"
+    ? "NULL::uuid[]"
     : request.replacePlotNumbers.length === 0
       ? "'{}'::uuid[]"
       : "(SELECT COALESCE(array_agg(id), '{}') FROM plots WHERE trial_id = :trialId AND number IN (:plotNumbers))";
-  const [{ number }] = await sequelize.query<{ number: number }>(
-    `INSERT INTO dataset_versions (id, assessment_id, trial_id, number, source, upload_id, created_by_id, reason, rows_added, rows_replaced, scope_plot_ids, created_at)
-     SELECT :versionId, :assessmentId, :trialId, COALESCE(MAX(number), 0) + 1, :source, :uploadId, :userId, :reason, :rowsAdded, 0, ${scope}, now()
+  // Inside the same transaction, so a file can never become two versions.
+  const marking = request.uploadId
+    ? "marked AS (UPDATE uploads SET status = 'committed', version_id = :versionId, updated_at = now() WHERE id = :uploadId AND status = 'checked' RETURNING 1),"
+    : "";
+  const [inserted] = await sequelize.query<{ number: number; rowsReplaced: number; marked: number | null }>(
+    `WITH ${marking}
+     scope AS (SELECT ${scope} AS plot_ids),
+     replaced AS (
+       SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int AS value_count
+         FROM scope, observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
+        WHERE s.assessment_id = :assessmentId AND s.replaced_in_version_id IS NULL
+          AND (scope.plot_ids IS NULL OR s.plot_id = ANY (scope.plot_ids)))
+     INSERT INTO dataset_versions (id, assessment_id, trial_id, number, source, upload_id, created_by_id, reason, rows_added, rows_replaced, scope_plot_ids, created_at)
+     SELECT :versionId, :assessmentId, :trialId, COALESCE(MAX(number), 0) + 1, :source, :uploadId, :userId, :reason, :rowsAdded,
+            (SELECT value_count FROM replaced), (SELECT plot_ids FROM scope), now()
        FROM dataset_versions WHERE assessment_id = :assessmentId
-     RETURNING number`,
+     RETURNING number, rows_replaced AS "rowsReplaced", ${request.uploadId ? "(SELECT count(*)::int FROM marked)" : "NULL::int"} AS marked`,
     {
       replacements: {
         versionId,
@@ -79,7 +93,8 @@ async function insertVersion(sequelize: Sequelize, versionId: string, request: C
       transaction,
     },
   );
-  return number;
+  if (request.uploadId && inserted.marked !== 1) throw new AppError("CONFLICT", "This file has already been committed, or was not checked.");
+  return { number: inserted.number, rowsReplaced: inserted.rowsReplaced };
 }
 
 /** Sequelize keeps the pg client of a transaction here; COPY has to run on that very client. */
@@ -109,37 +124,15 @@ interface VersionFacts {
 }
 
 /**
- * A new version's bookkeeping, in its transaction: the upload it came from is marked, the
- * values it replaced (the earlier sets its insert closed) are counted, and its notices are
- * queued.
+ * A new version's notices, queued with the data so a crash after the commit cannot lose them:
+ * the owner hears of a new upload, and the reviewers of any change made after their sign-off,
+ * with its reason.
  */
-async function recordVersion(sequelize: Sequelize, facts: VersionFacts, transaction: Transaction): Promise<number> {
-  const { request, versionId, next, status, reason } = facts;
-  if (request.uploadId) {
-    // Inside the same transaction, so a file can never become two versions.
-    const [, marked] = (await sequelize.query(
-      "UPDATE uploads SET status = 'committed', version_id = :versionId, updated_at = now() WHERE id = :uploadId AND status = 'checked'",
-      { replacements: { versionId, uploadId: request.uploadId }, transaction },
-    )) as [unknown, { rowCount?: number } | number];
-    if ((typeof marked === "number" ? marked : marked?.rowCount) !== 1) {
-      throw new AppError("CONFLICT", "This file has already been committed, or was not checked.");
-    }
-  }
-  const [{ rowsReplaced }] = await sequelize.query<{ rowsReplaced: number }>(
-    `UPDATE dataset_versions SET rows_replaced = (
-        SELECT COALESCE(sum(cardinality(v.quadrats)), 0)::int
-          FROM observation_sets s JOIN observation_values v ON v.version_id = s.version_id AND v.plot_id = s.plot_id
-         WHERE s.replaced_in_version_id = :versionId)
-      WHERE id = :versionId RETURNING rows_replaced AS "rowsReplaced"`,
-    { replacements: { versionId }, type: QueryTypes.SELECT, transaction },
-  );
-
-  // Queued with the data, so a crash after the commit cannot lose them: the owner hears of a
-  // new upload, and the reviewers of any change made after their sign-off, with its reason.
+async function queueNotices(facts: VersionFacts, transaction: Transaction): Promise<void> {
+  const { request, next, status, reason } = facts;
   const change = { trialId: request.trialId, assessmentId: request.assessmentId, versionNumber: next, actorId: request.userId };
   if (request.source === "upload") await notify({ type: "upload-committed", ...change }, { transaction });
   if (status === "locked") await notify({ type: "data-changed-after-lock", ...change, reason: reason ?? "" }, { transaction });
-  return rowsReplaced;
 }
 
 /** The audit entry of a new version, written last, after its values. */
@@ -191,9 +184,10 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
       type: QueryTypes.SELECT,
       transaction,
     });
-    const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then(async (next) => {
-      const facts: VersionFacts = { request, versionId, next, valueCount, status, reason };
-      return { facts, rowsReplaced: await recordVersion(sequelize, facts, transaction) };
+    const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then(async ({ number, rowsReplaced }) => {
+      const facts: VersionFacts = { request, versionId, next: number, valueCount, status, reason };
+      await queueNotices(facts, transaction);
+      return { facts, rowsReplaced };
     });
     recorded.catch(() => {});
     const confirmed = request.confirm?.();
