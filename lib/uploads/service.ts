@@ -126,7 +126,11 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
   const result = await readStoredFile(upload);
   const errors = result.problems.filter((problem) => problem.severity === "error").length;
   const status = errors > 0 ? "refused" : "checked";
-  await upload.update({ status, problems: result.problems, rowCount: result.rowsRead, sizeBytes: result.sizeBytes, sha256: result.sha256 });
+  const saved = upload.update({ status, problems: result.problems, rowCount: result.rowsRead, sizeBytes: result.sizeBytes, sha256: result.sha256 });
+  saved.catch(() => {});
+  // The change summary is worked out while the database records the check.
+  const changes = summarizeChanges(result.values, await current);
+  await saved;
   return {
     uploadId,
     status,
@@ -137,7 +141,7 @@ export async function checkUpload(uploadId: string): Promise<CheckedUpload> {
     errors,
     warnings: result.problems.length - errors,
     preview: recordsOf(result.values, 0, PREVIEW_ROWS),
-    changes: summarizeChanges(result.values, await current),
+    changes,
   };
 }
 
