@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useMemo, useState } from "react";
+import { useMemo, useState, useTransition } from "react";
 import { Button } from "@/components/ui/Button";
 import { DataTable, type DataColumn } from "@/components/ui/DataTable";
 import { callApi } from "@/lib/client/api";
@@ -30,6 +30,8 @@ const columns: DataColumn<PreviewRow>[] = [
 export function UploadPanel({ trialId, assessmentId, unit, needsReason, maxMegabytes }: { trialId: string; assessmentId: string; unit: string; needsReason: boolean; maxMegabytes: number }) {
   const router = useRouter();
   const [stage, setStage] = useState<Stage>({ kind: "idle" });
+  // The page's values are read again after a save; until they arrive they are the old ones.
+  const [refreshing, startRefresh] = useTransition();
   const [error, setError] = useState<string | null>(null);
   const [reason, setReason] = useState("");
 
@@ -76,7 +78,7 @@ export function UploadPanel({ trialId, assessmentId, unit, needsReason, maxMegab
       return;
     }
     setStage({ kind: "committed", version: committed.data.number });
-    router.refresh();
+    startRefresh(() => router.refresh());
   }
 
   const result = stage.kind === "checked" || stage.kind === "committing" ? stage.result : null;
@@ -119,7 +121,7 @@ export function UploadPanel({ trialId, assessmentId, unit, needsReason, maxMegab
       )}
       {stage.kind === "committed" && (
         <p role="status" className="rounded bg-leaf-50 px-3 py-2 text-sm text-leaf-900">
-          Saved as version {stage.version}. The values below are up to date.
+          Saved as version {stage.version}. {refreshing ? "Updating the values below…" : "The values below are up to date."}
         </p>
       )}
       {result && (

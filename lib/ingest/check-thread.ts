@@ -14,7 +14,7 @@ export interface PartJob {
   outcome: Promise<PartOutcome>;
 }
 
-/** Starts after this many failures of the thread are given up: the first thread checks alone. */
+/** After this many failures the thread is given up, and files are checked on one thread. */
 const MAX_FAILURES = 3;
 
 let thread: Worker | null = null;
