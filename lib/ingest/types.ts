@@ -63,7 +63,8 @@ export function recordsOf(values: IngestValues, start = 0, end = values.rows.len
 }
 
 export interface IngestContext {
-  plots: { number: number; treatmentCode: string }[];
+  /** The trial's plots; `id` where the server read them (a commit can then skip reading them again). */
+  plots: { number: number; treatmentCode: string; id?: string }[];
   quadratsPerPlot: number;
   unit: string;
   plausibleMin: number | null;

@@ -24,6 +24,11 @@ export interface CommitRequest {
   values: NewValue[] | ValueColumns;
   reason?: string;
   /**
+   * The trial's plots (number → id) when the caller knows them and `confirm` makes sure they
+   * are still the trial's plots; otherwise the commit reads them.
+   */
+  plotIds?: ReadonlyMap<number, string>;
+  /**
    * A check run alongside the commit once it holds the assessment's row (say, that the stored
    * file is still the one read); if it fails, the commit rolls back before writing its values.
    */
@@ -105,7 +110,7 @@ function clientOf(transaction: Transaction): pg.ClientBase {
 }
 
 /** Encodes batch by batch, letting the event loop turn between batches so the transaction's queries move on meanwhile. */
-async function encodeInTurns(grouped: PlotValues[], versionId: string, plotIds: Map<number, string>): Promise<Buffer[]> {
+async function encodeInTurns(grouped: PlotValues[], versionId: string, plotIds: ReadonlyMap<number, string>): Promise<Buffer[]> {
   const payload: Buffer[] = [];
   for (const buffer of encodeValues(grouped, versionId, plotIds)) {
     payload.push(buffer);
@@ -179,11 +184,15 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     // The database works through the version's rows (its insert trigger opens the sets) and
     // bookkeeping while this thread groups and encodes the values, turn by turn.
     const versionId = randomUUID();
-    const plotsRead = sequelize.query<{ id: string; number: number }>("SELECT id, number FROM plots WHERE trial_id = :trialId", {
-      replacements: { trialId: request.trialId },
-      type: QueryTypes.SELECT,
-      transaction,
-    });
+    const plotsRead: Promise<ReadonlyMap<number, string>> = request.plotIds
+      ? Promise.resolve(request.plotIds)
+      : sequelize
+          .query<{ id: string; number: number }>("SELECT id, number FROM plots WHERE trial_id = :trialId", {
+            replacements: { trialId: request.trialId },
+            type: QueryTypes.SELECT,
+            transaction,
+          })
+          .then((plots) => new Map(plots.map((plot) => [plot.number, plot.id])));
     const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then(async ({ number, rowsReplaced }) => {
       const facts: VersionFacts = { request, versionId, next: number, valueCount, status, reason };
       await queueNotices(facts, transaction);
@@ -194,12 +203,11 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
     confirmed?.catch(() => {});
     let payload: Buffer[] | null;
     try {
-      const plots = await plotsRead;
-      const plotIds = new Map(plots.map((plot) => [plot.number, plot.id]));
+      const plotIds = await plotsRead;
       const unknown = request.replacePlotNumbers?.find((number) => !plotIds.has(number));
       if (unknown !== undefined) throw new AppError("INVALID_INPUT", `Plot ${unknown} is not in this trial.`);
       // Refuses unknown plots and a second value for a cell too.
-      const grouped = groupValuesByPlot(columns, plots.map((plot) => plot.number));
+      const grouped = groupValuesByPlot(columns, [...plotIds.keys()]);
       payload = grouped.length > 0 ? await encodeInTurns(grouped, versionId, plotIds) : null;
     } catch (error) {
       // Nothing may still be using the transaction when it rolls back.

@@ -88,7 +88,7 @@ function writeRow(target: Buffer, view: DataView, start: number, versionId: Buff
  * A version's values in PostgreSQL's binary COPY format for observation_values, a row per
  * plot, in batches of about BATCH_BYTES: signature and header first, the end marker last.
  */
-export function* encodeValues(plots: readonly PlotValues[], versionId: string, plotIds: Map<number, string>): Generator<Buffer> {
+export function* encodeValues(plots: readonly PlotValues[], versionId: string, plotIds: ReadonlyMap<number, string>): Generator<Buffer> {
   const header = Buffer.alloc(SIGNATURE.length + 8);
   SIGNATURE.copy(header);
   yield header;

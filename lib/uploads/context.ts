@@ -10,8 +10,8 @@ export async function ingestContextFor(trialId: string, assessmentId: string): P
   const sequelize = db();
   const assessment = await Assessment.findOne({ where: { id: assessmentId, trialId } });
   if (!assessment) throw notFound("assessment");
-  const plots = await sequelize.query<{ number: number; treatmentCode: string }>(
-    `SELECT p.number, t.code AS "treatmentCode" FROM plots p JOIN treatments t ON t.id = p.treatment_id
+  const plots = await sequelize.query<{ number: number; treatmentCode: string; id: string }>(
+    `SELECT p.number, t.code AS "treatmentCode", p.id FROM plots p JOIN treatments t ON t.id = p.treatment_id
       WHERE p.trial_id = :trialId ORDER BY p.number`,
     { replacements: { trialId }, type: QueryTypes.SELECT },
   );

@@ -80,7 +80,7 @@ async function loadUpload(uploadId: string): Promise<Upload> {
  * same object (same entity tag) and the file would be checked against the same assessment
  * settings and plots.
  */
-const recentlyChecked = new Map<string, { etag: string; contextDigest: string; result: ReadCsvResult }>();
+const recentlyChecked = new Map<string, { etag: string; contextDigest: string; plotIds: Map<number, string>; result: ReadCsvResult }>();
 const RECENT_LIMIT = 4;
 
 /** Everything a file is checked against (plots with their treatments, quadrats, unit, range) as one digest. */
@@ -111,7 +111,8 @@ async function readStoredFile(upload: Upload): Promise<ReadCsvResult> {
   const context = await contextRead;
   const result = await readCsv(stored.body, context, undefined, { expectedBytes: stored.size });
   recentlyChecked.delete(upload.id);
-  recentlyChecked.set(upload.id, { etag: stored.etag, contextDigest: contextDigest(context), result });
+  const plotIds = new Map(context.plots.map((plot) => [plot.number, plot.id!]));
+  recentlyChecked.set(upload.id, { etag: stored.etag, contextDigest: contextDigest(context), plotIds, result });
   while (recentlyChecked.size > RECENT_LIMIT) recentlyChecked.delete(recentlyChecked.keys().next().value!);
   return result;
 }
@@ -165,7 +166,8 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
       if (!(await stillAsChecked(upload, cached))) throw new StoredFileChanged();
     };
     try {
-      return await commitChecked(user, upload, cached.result, reason, confirm);
+      // The digest confirmed covers the plots' ids too, so the commit need not read them.
+      return await commitChecked(user, upload, cached.result, reason, { confirm, plotIds: cached.plotIds });
     } catch (error) {
       if (!(error instanceof StoredFileChanged)) throw error;
     }
@@ -174,7 +176,13 @@ export async function commitUpload(user: SessionUser, uploadId: string, reason?:
   return commitChecked(user, upload, await readStoredFile(upload), reason);
 }
 
-async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvResult, reason: string | undefined, confirm?: () => Promise<void>): Promise<CommittedVersion> {
+async function commitChecked(
+  user: SessionUser,
+  upload: Upload,
+  result: ReadCsvResult,
+  reason: string | undefined,
+  remembered?: { confirm: () => Promise<void>; plotIds: ReadonlyMap<number, string> },
+): Promise<CommittedVersion> {
   if (result.sha256 !== upload.sha256) throw new AppError("CONFLICT", "The stored file changed after it was checked. Check it again.");
   if (result.problems.some((problem) => problem.severity === "error")) throw new AppError("CONFLICT", "The file has errors; fix them and upload it again.");
   const version = await commitVersion(db(), {
@@ -185,7 +193,8 @@ async function commitChecked(user: SessionUser, upload: Upload, result: ReadCsvR
     uploadId: upload.id,
     values: result.values,
     reason,
-    confirm,
+    confirm: remembered?.confirm,
+    plotIds: remembered?.plotIds,
   });
   recentlyChecked.delete(upload.id);
   // An upload replaces every plot: the values now in place are exactly the file's rows.
