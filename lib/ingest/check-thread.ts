@@ -19,7 +19,8 @@ const MAX_FAILURES = 3;
 
 let thread: Worker | null = null;
 let failures = 0;
-let busy = false;
+/** The job the thread is working on (one at a time), until it answers for it. */
+let activeJob: number | null = null;
 let nextJob = 1;
 const waiting = new Map<number, { resolve: (outcome: PartOutcome) => void; reject: (error: Error) => void }>();
 
@@ -27,7 +28,7 @@ function threadFailed(error: Error): void {
   failures += 1;
   process.stderr.write(`[hoebench] the file-checking thread failed (${error.message}); files are checked on one thread meanwhile\n`);
   thread = null;
-  busy = false;
+  activeJob = null;
   for (const pending of waiting.values()) pending.reject(error);
   waiting.clear();
 }
@@ -49,14 +50,20 @@ function checkThread(): Worker | null {
   }
   started.unref();
   started.on("message", (message: FromCheckThread) => {
+    // A thread given up on has had its jobs failed already.
+    if (thread !== started) return;
+    if (message.job === activeJob) activeJob = null;
     const pending = waiting.get(message.job);
     waiting.delete(message.job);
-    busy = false;
     if (!pending) return;
     if (message.kind === "done") pending.resolve(message.outcome);
     else pending.reject(new Error(message.message));
   });
   started.on("error", (error) => threadFailed(error));
+  started.on("messageerror", (error) => {
+    threadFailed(error);
+    void started.terminate();
+  });
   started.on("exit", (code) => {
     if (thread === started) threadFailed(new Error(`it stopped with code ${code}`));
   });
@@ -79,11 +86,11 @@ export function checkThreadState(): "idle" | "running" | "failed" {
  * cannot run): the caller then checks the whole file itself.
  */
 export function claimCheckThread(request: PartRequest): PartJob | null {
-  if (busy) return null;
+  if (activeJob !== null) return null;
   const worker = checkThread();
   if (!worker) return null;
-  busy = true;
   const job = nextJob++;
+  activeJob = job;
   const outcome = new Promise<PartOutcome>((resolve, reject) => waiting.set(job, { resolve, reject }));
   outcome.catch(() => {});
   const post = (message: ToCheckThread, transfer: ArrayBuffer[] = []) => worker.postMessage(message, transfer);

@@ -21,9 +21,19 @@ port.on("message", (message: ToCheckThread) => {
     const job = message.job;
     const bytes = new ChunkQueue<Uint8Array>();
     current = { job, bytes };
+    const finished = () => {
+      // Bytes still arriving for a part already refused are not kept.
+      if (current?.job === job) current = null;
+    };
     checkPart(message.request, bytes).then(
-      (outcome) => port.postMessage({ kind: "done", job, outcome }, "part" in outcome ? partBuffers(outcome.part) : []),
-      (error: Error) => port.postMessage({ kind: "failed", job, message: error?.message ?? String(error) }),
+      (outcome) => {
+        finished();
+        port.postMessage({ kind: "done", job, outcome }, "part" in outcome ? partBuffers(outcome.part) : []);
+      },
+      (error: Error) => {
+        finished();
+        port.postMessage({ kind: "failed", job, message: error?.message ?? String(error) });
+      },
     );
     return;
   }

@@ -88,7 +88,21 @@ export function readHeader(cells: string[], expectedUnit: string, quadratsPerPlo
 
   const format = quadratColumns.size > 0 && !found.has("value") ? "wide" : "long";
   if (format === "wide") {
+    const columnOf = new Map<number, number>();
     for (const [index, quadrat] of quadratColumns) {
+      const earlier = columnOf.get(quadrat);
+      if (earlier !== undefined) {
+        problems.push({
+          severity: "error",
+          code: "extra-column",
+          row: 1,
+          column: cells[index].trim(),
+          message: `Columns "${cells[earlier].trim()}" and "${cells[index].trim()}" are both quadrat ${quadrat}; keep one.`,
+        });
+        quadratColumns.delete(index);
+        continue;
+      }
+      columnOf.set(quadrat, index);
       if (quadrat < 1 || quadrat > quadratsPerPlot) {
         problems.push({
           severity: "error",

@@ -92,14 +92,23 @@ export async function readCsv(
   const { expectedBytes = 0, splitFromBytes = SPLIT_FROM_BYTES, claimPartChecker = claimCheckThread } = options;
   const cutFrom = expectedBytes >= splitFromBytes ? Math.floor(expectedBytes / 2) : Infinity;
   let sizeBytes = 0;
+  // The outcome is decided (a whole-file problem in the first part): the rest is only counted and hashed.
   let stopped = false;
+  // The caller has gone (an error): the rest is not even read.
+  let abandoned = false;
+  // Found while reading, and first in what is reported: what kind of file this is (its first
+  // bytes), then the byte limit. Both are facts about the bytes, found the same way however
+  // the file is parsed, so one pass and two halves report the same.
+  let sniffProblem: IngestProblem | null = null;
+  let overLimit = false;
 
   // The later part: its request, the thread checking it, and its bytes (kept in case the
   // thread fails, when this thread checks them itself).
   let later = null as { request: PartRequest; job: PartJob; chunks: Uint8Array[] } | null;
 
   // Bytes are read as fast as they arrive, not as fast as the first part is parsed, so the
-  // later part reaches the second thread early.
+  // later part reaches the second thread early. Every byte up to the limit is counted and
+  // hashed, a refused file's too: its size and checksum are the whole file's.
   async function readBytes(): Promise<void> {
     const scan = new LineScan();
     let cutting = Number.isFinite(cutFrom);
@@ -107,25 +116,22 @@ export async function readCsv(
     let header = new Uint8Array();
     let offset = 0;
     for await (const chunk of source) {
-      if (stopped) break;
+      if (abandoned) break;
       sizeBytes += chunk.byteLength;
       if (sizeBytes > limits.maxBytes) {
-        fatal.push({ severity: "error", code: "too-large", message: `The file is larger than ${Math.round(limits.maxBytes / 1024 / 1024)} MB, the most one upload may be.` });
+        overLimit = true;
         break;
       }
+      hash.update(chunk);
       if (!sniffed) {
         sniffed = true;
-        const problem = sniffFile(chunk);
-        if (problem) {
-          fatal.push(problem);
-          break;
-        }
+        sniffProblem = sniffFile(chunk);
         const headerEnd = chunk.indexOf(10);
         // A header longer than the first piece: too odd a file to cut.
         if (headerEnd === -1) cutting = false;
         else header = new Uint8Array(chunk.subarray(0, headerEnd + 1));
       }
-      hash.update(chunk);
+      if (sniffProblem || stopped) continue;
       if (later) {
         later.chunks.push(chunk);
         later.job.send(chunk);
@@ -133,7 +139,9 @@ export async function readCsv(
       }
       let firstBytes = chunk;
       if (cutting) {
-        const cut = offset + chunk.length > cutFrom ? chunk.indexOf(10, Math.max(0, cutFrom - offset)) : -1;
+        // Never inside the first piece: papaparse guesses the line break from all of it, so the
+        // first part must hold all of it for the two to agree on the line break.
+        const cut = offset > 0 && offset + chunk.length > cutFrom ? chunk.indexOf(10, Math.max(0, cutFrom - offset)) : -1;
         if (cut !== -1) firstBytes = chunk.subarray(0, cut + 1);
         scan.take(firstBytes);
         const newline = cut !== -1 ? scan.newline() : null;
@@ -155,7 +163,7 @@ export async function readCsv(
       offset += chunk.length;
       firstPart.push(firstBytes);
     }
-    if (!sniffed && !fatal.length) fatal.push(sniffFile(new Uint8Array())!);
+    if (!sniffed) sniffProblem = sniffFile(new Uint8Array());
     firstPart.end();
     later?.job.end();
   }
@@ -166,21 +174,25 @@ export async function readCsv(
   });
   reading.catch(() => {});
   let outcome: PartOutcome | null = null;
+  let settled = false;
   try {
     await parseRows(firstPartText(firstPart, fatal), checker, { limits, fatal });
     if (fatal.length) stopped = true;
     await reading;
-    if (later && !fatal.length) {
+    if (later && !fatal.length && !sniffProblem && !overLimit) {
       const { request, job, chunks } = later;
       outcome = await job.outcome.catch(() => checkPart(request, replay(chunks)));
     }
+    settled = true;
   } finally {
+    if (!settled) abandoned = true;
     // Refused on the first part, or failed: the second thread is let go for the next file.
     if (later && outcome === null) later.job.drop();
   }
-  if (outcome && "fatal" in outcome) fatal.push(outcome.fatal);
-
-  if (fatal.length) return { format: null, values: noValues(), problems: fatal, rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
+  const tooLarge: IngestProblem = { severity: "error", code: "too-large", message: `The file is larger than ${Math.round(limits.maxBytes / 1024 / 1024)} MB, the most one upload may be.` };
+  // The first part's problems come before the later part's in the file.
+  const problem = sniffProblem ?? (overLimit ? tooLarge : null) ?? fatal[0] ?? (outcome && "fatal" in outcome ? outcome.fatal : null);
+  if (problem) return { format: null, values: noValues(), problems: [problem], rowsRead: 0, sizeBytes, sha256: hash.digest("hex") };
   if (outcome && "part" in outcome) checker.absorb(outcome.part);
   return { ...checker.finish(), sizeBytes, sha256: hash.digest("hex") };
 }

@@ -134,6 +134,25 @@ describe("reading a data file", () => {
     }
   });
 
+  it("refuses a wide sheet with two columns for one quadrat", async () => {
+    const result = await readCsv(chunks("plot,q1,Q1,q2\n101,1,2,3\n"), context);
+    expect(result.problems[0]).toEqual({ severity: "error", code: "extra-column", row: 1, column: "Q1", message: 'Columns "q1" and "Q1" are both quadrat 1; keep one.' });
+    // The row is read once, by the first of the two columns: no value repeats itself.
+    expect(result.problems.filter((p) => p.code === "duplicate")).toEqual([]);
+    expect(recordsOf(result.values).map((r) => [r.quadrat, r.value])).toEqual([[1, 1], [2, 3]]);
+  });
+
+  it("gives a refused file's size and checksum over every byte, and puts the byte limit before what parsing finds", async () => {
+    const { createHash } = await import("node:crypto");
+    const file = "plot;quadrat;value\n101;1;3\n".repeat(20);
+    const refused = await readCsv(chunks(file.slice(0, 30), file.slice(30)), context);
+    expect(refused.problems).toEqual([expect.objectContaining({ code: "delimiter" })]);
+    expect(refused.sizeBytes).toBe(file.length);
+    expect(refused.sha256).toBe(createHash("sha256").update(file).digest("hex"));
+    const large = await readCsv(chunks(file.slice(0, 30), file.slice(30)), context, { maxBytes: 100, maxRows: 10, maxColumns: 5 });
+    expect(large.problems).toEqual([expect.objectContaining({ code: "too-large" })]);
+  });
+
   it("enforces the byte, row and column limits before going on", async () => {
     const limits = { maxBytes: 64, maxRows: 3, maxColumns: 5 };
     const big = await readCsv(chunks("plot,quadrat,value\n", "x".repeat(80)), context, limits);

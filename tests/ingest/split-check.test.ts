@@ -1,3 +1,4 @@
+import { createHash } from "node:crypto";
 import { describe, expect, it } from "vitest";
 import { claimCheckThread, type PartJob } from "@/lib/ingest/check-thread";
 import { checkPart } from "@/lib/ingest/check-part";
@@ -132,11 +133,32 @@ describe("checking a large file in two parts at once", () => {
     const encoding = await bothWays(latin1);
     expect(encoding.cuts).toHaveLength(1);
     expect(encoding.split.problems).toEqual([expect.objectContaining({ code: "encoding" })]);
-    expect(encoding.split.problems).toEqual(encoding.single.problems);
+    // Size and checksum too: a refused file's are the whole file's, however it was read.
+    expect(encoding.split).toEqual(encoding.single);
+    expect(encoding.split.sha256).toBe(createHash("sha256").update(latin1).digest("hex"));
+    expect(encoding.split.sizeBytes).toBe(latin1.length);
 
     const rows = await bothWays(head, { ...defaultIngestLimits, maxRows: 140 });
     expect(rows.split.problems).toEqual([expect.objectContaining({ code: "too-many-rows" })]);
-    expect(rows.split.problems).toEqual(rows.single.problems);
+    expect(rows.split).toEqual(rows.single);
+
+    const large = await bothWays(head, { ...defaultIngestLimits, maxBytes: Math.floor(byteLength(head) * 0.75) });
+    expect(large.split.problems).toEqual([expect.objectContaining({ code: "too-large" })]);
+    expect(large.split).toEqual(large.single);
+  });
+
+  it("cuts no file inside its first piece, from which papaparse guesses the line break", async () => {
+    // Windows breaks first, then old-Mac ones: one pass splits lines at the break guessed from the first piece.
+    // The Windows lines are long, so the file's middle falls among them.
+    const lines = fullFile().map((line, index) => (index > 0 && index <= 20 ? line.replace(/,(pigweed|purslane),/, `,${"x".repeat(200)}$1,`) : line));
+    const file = `${lines.slice(0, 21).join("\r\n")}\r\n${lines.slice(21).join("\r")}\r`;
+    expect(file.indexOf("\r", file.length / 2)).toBeLessThan(file.lastIndexOf("\r\n"));
+    const cuts: PartRequest[] = [];
+    const options: ReadCsvOptions = { expectedBytes: byteLength(file), splitFromBytes: 1, claimPartChecker: (request) => (cuts.push(request), claimCheckThread(request)) };
+    const single = await readCsv(pieces(file, byteLength(file)), context);
+    const split = await readCsv(pieces(file, byteLength(file)), context, defaultIngestLimits, options);
+    expect(cuts).toEqual([]);
+    expect(split).toEqual(single);
   });
 
   it("does not cut a file whose first half has a quoted cell or mixed line breaks", async () => {
