@@ -3,7 +3,9 @@ import { decodeUtf8, parseRows } from "./parse-rows";
 import { RowChecker } from "./row-checker";
 import type { IngestProblem } from "./types";
 
-async function* headerThen(header: Uint8Array, bytes: AsyncIterable<Uint8Array>): AsyncGenerator<Uint8Array> {
+type Pieces = AsyncIterable<Uint8Array> | Iterable<Uint8Array>;
+
+async function* headerThen(header: Uint8Array, bytes: Pieces): AsyncGenerator<Uint8Array> {
   yield header;
   yield* bytes;
 }
@@ -13,7 +15,7 @@ async function* headerThen(header: Uint8Array, bytes: AsyncIterable<Uint8Array>)
  * whole file would check those lines: same columns (from the header), same line numbers, same
  * limits. Runs on the second thread, or on the first when no second is free.
  */
-export async function checkPart(request: PartRequest, bytes: AsyncIterable<Uint8Array>): Promise<PartOutcome> {
+export async function checkPart(request: PartRequest, bytes: Pieces): Promise<PartOutcome> {
   const fatal: IngestProblem[] = [];
   const checker = new RowChecker(request.context, { reportHeader: false });
   await parseRows(decodeUtf8(headerThen(request.header, bytes), fatal), checker, {

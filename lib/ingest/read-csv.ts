@@ -66,10 +66,6 @@ async function* firstPartText(bytes: AsyncIterable<Uint8Array>, fatal: IngestPro
   }
 }
 
-async function* replay(chunks: Uint8Array[]): AsyncGenerator<Uint8Array> {
-  yield* chunks;
-}
-
 /**
  * Streams a data file through checks without holding it twice in memory: byte limit, file
  * type, UTF-8, delimiter, column and row limits, then every row through RowChecker.
@@ -181,7 +177,7 @@ export async function readCsv(
     await reading;
     if (later && !fatal.length && !sniffProblem && !overLimit) {
       const { request, job, chunks } = later;
-      outcome = await job.outcome.catch(() => checkPart(request, replay(chunks)));
+      outcome = await job.outcome.catch(() => checkPart(request, chunks));
     }
     settled = true;
   } finally {

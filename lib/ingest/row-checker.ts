@@ -64,9 +64,8 @@ export class RowChecker {
    */
   private readonly spellings = new Map<string, { number: number; name: string; spelling: number }>();
   private readonly spellingNames: string[] = [];
-  /** The values taken, as columns: the file's line, the plot (number and place in context.plots), quadrat, spelling, value. */
+  /** The values taken, as columns: the file's line, the plot (its place in context.plots), quadrat, spelling, value. */
   private readonly rows = intColumn();
-  private readonly plotNumbers = intColumn();
   private readonly valuePlotIndexes = intColumn();
   private readonly quadrats = intColumn();
   private readonly valueSpellings = intColumn();
@@ -198,18 +197,14 @@ export class RowChecker {
     }
     const slot = plotIndex * this.stride + quadrat;
     const { number: speciesNumber, spelling } = this.speciesOf(species);
-    const table = this.seen[speciesNumber];
-    const overflowKey = speciesNumber * this.quadratsWithValues.length + slot;
-    const earlier = table ? table[slot] : (this.seenOverflow.get(overflowKey) ?? 0);
+    const earlier = this.earlierRow(speciesNumber, slot);
     if (earlier !== 0) {
       const cell = describeCell(plotNumber, quadrat, species);
       if (this.problems.length < MAX_PROBLEMS_SHOWN) this.duplicatesListed.push({ problem: this.problems.length, cell, earlier });
       this.report(duplicateProblem(row, column, cell, earlier));
       return;
     }
-    if (table) table[slot] = row;
-    else this.seenOverflow.set(overflowKey, row);
-    this.quadratsWithValues[slot] = 1;
+    this.markSeen(speciesNumber, slot, row);
     const { plausibleMin, plausibleMax } = this.context;
     if ((plausibleMin !== null && reading.value < plausibleMin) || (plausibleMax !== null && reading.value > plausibleMax)) {
       this.implausibleValues.push(this.rows.length);
@@ -221,12 +216,24 @@ export class RowChecker {
         message: `Row ${row}: ${reading.value} ${this.context.unit} for ${describeCell(plotNumber, quadrat, species)} is outside the usual range (${plausibleMin ?? "–"} to ${plausibleMax ?? "–"}). Check it; it will be kept if you confirm.`,
       });
     }
-    this.take(row, plotNumber, plotIndex, quadrat, spelling, reading.value);
+    this.take(row, plotIndex, quadrat, spelling, reading.value);
   }
 
-  private take(row: number, plotNumber: number, plotIndex: number, quadrat: number, spelling: number, value: number): void {
+  /** The row that already gave a value for this species at this slot, or 0. */
+  private earlierRow(speciesNumber: number, slot: number): number {
+    const table = this.seen[speciesNumber];
+    return table ? table[slot] : (this.seenOverflow.get(speciesNumber * this.quadratsWithValues.length + slot) ?? 0);
+  }
+
+  private markSeen(speciesNumber: number, slot: number, row: number): void {
+    const table = this.seen[speciesNumber];
+    if (table) table[slot] = row;
+    else this.seenOverflow.set(speciesNumber * this.quadratsWithValues.length + slot, row);
+    this.quadratsWithValues[slot] = 1;
+  }
+
+  private take(row: number, plotIndex: number, quadrat: number, spelling: number, value: number): void {
     this.rows.push(row);
-    this.plotNumbers.push(plotNumber);
     this.valuePlotIndexes.push(plotIndex);
     this.quadrats.push(quadrat);
     this.valueSpellings.push(spelling);
@@ -287,15 +294,13 @@ export class RowChecker {
     // The values that drew a range warning, in increasing order: the next one to come.
     let nextImplausible = 0;
     const stride = this.stride;
-    const slots = this.quadratsWithValues.length;
     const plots = this.context.plots;
     for (let index = 0; index < rows.length; index += 1) {
       const plotIndex = plotIndexes[index];
       const quadrat = quadrats[index];
       const slot = plotIndex * stride + quadrat;
       const spelling = spellings[speciesIndexes[index]];
-      const table = this.seen[spelling.number];
-      const earlier = table ? table[slot] : (this.seenOverflow.get(spelling.number * slots + slot) ?? 0);
+      const earlier = this.earlierRow(spelling.number, slot);
       const row = rows[index];
       // Bounds checked first: reading past a typed array's end is slow.
       const implausible = nextImplausible < implausibleValues.length && implausibleValues[nextImplausible] === index;
@@ -310,11 +315,9 @@ export class RowChecker {
         repeated.set(`${row}:${column}`, earlier);
         continue;
       }
-      if (table) table[slot] = row;
-      else this.seenOverflow.set(spelling.number * slots + slot, row);
-      this.quadratsWithValues[slot] = 1;
+      this.markSeen(spelling.number, slot, row);
       if (implausible) this.implausibleValues.push(this.rows.length);
-      this.take(row, plots[plotIndex].number, plotIndex, quadrat, spelling.spelling, values[index]);
+      this.take(row, plotIndex, quadrat, spelling.spelling, values[index]);
     }
     return { crossing, crossingCount, dropped, repeated };
   }
@@ -397,7 +400,7 @@ export class RowChecker {
     }
     const values = {
       rows: this.rows.view(),
-      plotNumbers: this.plotNumbers.view(),
+      plotNumbers: Int32Array.from(this.valuePlotIndexes.view(), (plotIndex) => this.context.plots[plotIndex].number),
       quadrats: this.quadrats.view(),
       speciesIndexes: this.valueSpellings.view(),
       speciesNames: this.spellingNames,

@@ -121,7 +121,6 @@ async function encodeInTurns(grouped: PlotValues[], versionId: string, plotIds: 
 
 interface VersionFacts {
   request: CommitRequest;
-  versionId: string;
   next: number;
   valueCount: number;
   status: string;
@@ -194,7 +193,7 @@ export async function commitVersion(sequelize: Sequelize, request: CommitRequest
           })
           .then((plots) => new Map(plots.map((plot) => [plot.number, plot.id])));
     const recorded = insertVersion(sequelize, versionId, request, valueCount, reason, transaction).then(async ({ number, rowsReplaced }) => {
-      const facts: VersionFacts = { request, versionId, next: number, valueCount, status, reason };
+      const facts: VersionFacts = { request, next: number, valueCount, status, reason };
       await queueNotices(facts, transaction);
       return { facts, rowsReplaced };
     });
